@@ -1,0 +1,568 @@
+/**
+ * Jigboard's whole data model, designed once for every capability:
+ * channels and people, the episode board, build plans, timed scripts,
+ * shots/footage/coverage, shoot days, sponsors and the publish package.
+ *
+ * Conventions: snake_case columns, uuid keys, every row a channel owns carries
+ * channel_id directly or through its episode; script-timeline positions are
+ * integer frames at the episode's rate; wall-clock times are timestamptz;
+ * money is integer minor units with an ISO 4217 code.
+ */
+import { sql } from "drizzle-orm";
+import {
+  bigint,
+  boolean,
+  check,
+  date,
+  index,
+  integer,
+  jsonb,
+  numeric,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+import type { Role } from "../lib/roles";
+import type { Stage } from "../lib/stages";
+import type { FrameRateId } from "../lib/frame-rate";
+
+const id = () => uuid("id").primaryKey().defaultRandom();
+const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
+const updatedAt = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
+
+/* ───────────── people and channels ───────────── */
+
+export const users = pgTable(
+  "users",
+  {
+    id: id(),
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    passwordHash: text("password_hash").notNull(),
+    /** Presenter's reading rate for script timing (words per minute). */
+    readingRateWpm: integer("reading_rate_wpm").notNull().default(150),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("users_email_key").on(t.email), check("users_email_lower", sql`${t.email} = lower(${t.email})`)],
+);
+
+export const channels = pgTable("channels", {
+  id: id(),
+  name: text("name").notNull(),
+  /** Unit system for the cut list: "imperial" (inches) or "metric" (millimetres). */
+  units: text("units").$type<"imperial" | "metric">().notNull().default("imperial"),
+  currency: text("currency").notNull().default("USD"),
+  /** Voice-over stretches without B-roll longer than this are gaps (ms). */
+  brollGapMs: integer("broll_gap_ms").notNull().default(2000),
+  /** To-camera stretches longer than this without a cutaway are gaps (ms). */
+  toCameraMaxMs: integer("to_camera_max_ms").notNull().default(20000),
+  createdAt: createdAt(),
+  archivedAt: timestamp("archived_at", { withTimezone: true }),
+});
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    roles: text("roles").array().$type<Role[]>().notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.channelId, t.userId] }), index("memberships_user_idx").on(t.userId)],
+);
+
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: id(),
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    roles: text("roles").array().$type<Role[]>().notNull(),
+    tokenHash: text("token_hash").notNull(),
+    invitedBy: uuid("invited_by").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("invitations_token_key").on(t.tokenHash), index("invitations_channel_idx").on(t.channelId)],
+);
+
+export const passwordResets = pgTable(
+  "password_resets",
+  {
+    id: id(),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    usedAt: timestamp("used_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("password_resets_token_key").on(t.tokenHash), index("password_resets_user_idx").on(t.userId)],
+);
+
+/** Failed and successful sign-in attempts, keyed "account:<email>" or "address:<ip>". */
+export const signInAttempts = pgTable(
+  "sign_in_attempts",
+  {
+    id: bigint("id", { mode: "number" }).primaryKey().generatedAlwaysAsIdentity(),
+    key: text("key").notNull(),
+    succeeded: boolean("succeeded").notNull(),
+    attemptedAt: timestamp("attempted_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("sign_in_attempts_key_time_idx").on(t.key, t.attemptedAt)],
+);
+
+/* ───────────── episodes (the board) ───────────── */
+
+export const episodes = pgTable(
+  "episodes",
+  {
+    id: id(),
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    title: text("title").notNull(),
+    summary: text("summary").notNull().default(""),
+    stage: text("stage").$type<Stage>().notNull(),
+    position: integer("position").notNull(),
+    targetRuntimeSeconds: integer("target_runtime_seconds"),
+    publishDate: date("publish_date"),
+    frameRate: text("frame_rate").$type<FrameRateId>().notNull().default("29.97"),
+    dropFrame: boolean("drop_frame").notNull().default(false),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    updatedBy: uuid("updated_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    archivedAt: timestamp("archived_at", { withTimezone: true }),
+  },
+  (t) => [
+    index("episodes_channel_stage_pos_idx").on(t.channelId, t.stage, t.position),
+    index("episodes_channel_publish_idx").on(t.channelId, t.publishDate),
+    check("episodes_drop_frame_rate", sql`not ${t.dropFrame} or ${t.frameRate} in ('29.97','59.94')`),
+  ],
+);
+
+/* ───────────── build plan ───────────── */
+
+export const tools = pgTable(
+  "tools",
+  {
+    id: id(),
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    kind: text("kind").notNull().default(""),
+    /** bought | gifted | loaned | paid_placement */
+    acquisition: text("acquisition").notNull().default("bought"),
+    sponsorId: uuid("sponsor_id").references(() => sponsors.id, { onDelete: "set null" }),
+    caution: text("caution").notNull().default(""),
+    photoKey: text("photo_key"),
+    createdAt: createdAt(),
+    archivedAt: timestamp("archived_at", { withTimezone: true }),
+  },
+  (t) => [index("tools_channel_idx").on(t.channelId), index("tools_sponsor_idx").on(t.sponsorId)],
+);
+
+export const buildSteps = pgTable(
+  "build_steps",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    position: integer("position").notNull(),
+    title: text("title").notNull(),
+    notes: text("notes").notNull().default(""),
+    activeMinutes: integer("active_minutes").notNull().default(0),
+    waitMinutes: integer("wait_minutes").notNull().default(0),
+    waitReason: text("wait_reason").notNull().default(""),
+    crewNeeded: integer("crew_needed").notNull().default(1),
+    coverageKinds: text("coverage_kinds").array().notNull().default(sql`'{}'::text[]`),
+    /** planned | in_progress | done | failed | skipped */
+    status: text("status").notNull().default("planned"),
+    failureNote: text("failure_note"),
+    failurePhotoKey: text("failure_photo_key"),
+    remedyOfStepId: uuid("remedy_of_step_id"),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("build_steps_episode_idx").on(t.episodeId, t.position), index("build_steps_remedy_idx").on(t.remedyOfStepId)],
+);
+
+export const stepDependencies = pgTable(
+  "step_dependencies",
+  {
+    stepId: uuid("step_id").notNull().references(() => buildSteps.id, { onDelete: "cascade" }),
+    dependsOnStepId: uuid("depends_on_step_id").notNull().references(() => buildSteps.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.stepId, t.dependsOnStepId] }), index("step_dependencies_dep_idx").on(t.dependsOnStepId)],
+);
+
+export const stepTools = pgTable(
+  "step_tools",
+  {
+    stepId: uuid("step_id").notNull().references(() => buildSteps.id, { onDelete: "cascade" }),
+    toolId: uuid("tool_id").notNull().references(() => tools.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.stepId, t.toolId] }), index("step_tools_tool_idx").on(t.toolId)],
+);
+
+export const materials = pgTable(
+  "materials",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    stepId: uuid("step_id").references(() => buildSteps.id, { onDelete: "set null" }),
+    position: integer("position").notNull().default(0),
+    partName: text("part_name").notNull(),
+    material: text("material").notNull().default(""),
+    /** Dimensions in the row's unit ("in" or "mm"), exact decimals. */
+    unit: text("unit").$type<"in" | "mm">().notNull().default("in"),
+    thickness: numeric("thickness", { precision: 12, scale: 4 }).notNull(),
+    width: numeric("width", { precision: 12, scale: 4 }).notNull(),
+    length: numeric("length", { precision: 12, scale: 4 }).notNull(),
+    quantity: integer("quantity").notNull().default(1),
+    sizing: text("sizing").$type<"nominal" | "actual">().notNull().default("actual"),
+    /** board_foot | linear_foot | linear_metre | sheet | each */
+    pricingUnit: text("pricing_unit").notNull().default("board_foot"),
+    unitPriceMinor: integer("unit_price_minor").notNull().default(0),
+    currency: text("currency").notNull().default("USD"),
+    wastePercent: numeric("waste_percent", { precision: 5, scale: 2 }).notNull().default("0"),
+    supplierNote: text("supplier_note").notNull().default(""),
+  },
+  (t) => [index("materials_episode_idx").on(t.episodeId), index("materials_step_idx").on(t.stepId)],
+);
+
+/* ───────────── timed script ───────────── */
+
+export const scriptSegments = pgTable(
+  "script_segments",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    position: integer("position").notNull(),
+    /** to_camera | voice_over | sponsor_read | on_screen_text */
+    kind: text("kind").notNull(),
+    text: text("text").notNull().default(""),
+    stepId: uuid("step_id").references(() => buildSteps.id, { onDelete: "set null" }),
+    pinnedStartFrame: integer("pinned_start_frame"),
+    explicitDurationFrames: integer("explicit_duration_frames"),
+    editorNotes: text("editor_notes").notNull().default(""),
+    chapterStart: boolean("chapter_start").notNull().default(false),
+    chapterTitle: text("chapter_title"),
+    /** Optimistic concurrency: every save names the version it was based on. */
+    version: integer("version").notNull().default(1),
+    updatedBy: uuid("updated_by").references(() => users.id, { onDelete: "set null" }),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index("script_segments_episode_idx").on(t.episodeId, t.position), index("script_segments_step_idx").on(t.stepId)],
+);
+
+export const scriptRevisions = pgTable(
+  "script_revisions",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    segmentId: uuid("segment_id"),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),
+    before: jsonb("before"),
+    after: jsonb("after"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("script_revisions_episode_idx").on(t.episodeId, t.createdAt)],
+);
+
+/* ───────────── shots, footage, coverage ───────────── */
+
+export const shootDays = pgTable(
+  "shoot_days",
+  {
+    id: id(),
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    episodeId: uuid("episode_id").references(() => episodes.id, { onDelete: "set null" }),
+    day: date("day").notNull(),
+    timeZone: text("time_zone").notNull().default("UTC"),
+    callAt: timestamp("call_at", { withTimezone: true }).notNull(),
+    wrapAt: timestamp("wrap_at", { withTimezone: true }).notNull(),
+    location: text("location").notNull().default(""),
+    notes: text("notes").notNull().default(""),
+    callSheetSentAt: timestamp("call_sheet_sent_at", { withTimezone: true }),
+  },
+  (t) => [index("shoot_days_channel_day_idx").on(t.channelId, t.day), index("shoot_days_episode_idx").on(t.episodeId)],
+);
+
+export const shootDayCrew = pgTable(
+  "shoot_day_crew",
+  {
+    shootDayId: uuid("shoot_day_id").notNull().references(() => shootDays.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    available: boolean("available").notNull().default(true),
+    duty: text("duty").notNull().default(""),
+  },
+  (t) => [primaryKey({ columns: [t.shootDayId, t.userId] }), index("shoot_day_crew_user_idx").on(t.userId)],
+);
+
+export const scheduledSteps = pgTable(
+  "scheduled_steps",
+  {
+    shootDayId: uuid("shoot_day_id").notNull().references(() => shootDays.id, { onDelete: "cascade" }),
+    stepId: uuid("step_id").notNull().references(() => buildSteps.id, { onDelete: "cascade" }),
+    startsAt: timestamp("starts_at", { withTimezone: true }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.shootDayId, t.stepId] }), index("scheduled_steps_step_idx").on(t.stepId)],
+);
+
+export const gaps = pgTable(
+  "gaps",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    segmentId: uuid("segment_id").references(() => scriptSegments.id, { onDelete: "set null" }),
+    startFrame: integer("start_frame").notNull(),
+    endFrame: integer("end_frame").notNull(),
+    /** computed | marked */
+    source: text("source").notNull(),
+    /** open | resolved | dismissed */
+    status: text("status").notNull().default("open"),
+    note: text("note").notNull().default(""),
+    createdAt: createdAt(),
+  },
+  (t) => [index("gaps_episode_idx").on(t.episodeId, t.status), check("gaps_range", sql`${t.endFrame} > ${t.startFrame}`)],
+);
+
+export const shots = pgTable(
+  "shots",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    stepId: uuid("step_id").references(() => buildSteps.id, { onDelete: "set null" }),
+    segmentId: uuid("segment_id").references(() => scriptSegments.id, { onDelete: "set null" }),
+    shootDayId: uuid("shoot_day_id").references(() => shootDays.id, { onDelete: "set null" }),
+    gapId: uuid("gap_id").references(() => gaps.id, { onDelete: "set null" }),
+    position: integer("position").notNull().default(0),
+    kind: text("kind").notNull(),
+    description: text("description").notNull().default(""),
+    framing: text("framing").notNull().default(""),
+    cameraNotes: text("camera_notes").notNull().default(""),
+    priority: integer("priority").notNull().default(2),
+    /** planned | captured | selected | rejected */
+    status: text("status").notNull().default("planned"),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("shots_episode_idx").on(t.episodeId, t.status),
+    index("shots_step_idx").on(t.stepId),
+    index("shots_segment_idx").on(t.segmentId),
+    index("shots_day_idx").on(t.shootDayId),
+    index("shots_gap_idx").on(t.gapId),
+  ],
+);
+
+export const clips = pgTable(
+  "clips",
+  {
+    id: id(),
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    shotId: uuid("shot_id").references(() => shots.id, { onDelete: "set null" }),
+    storageKey: text("storage_key").notNull(),
+    uploadId: text("upload_id"),
+    /** uploading | stored */
+    state: text("state").notNull().default("uploading"),
+    originalName: text("original_name").notNull(),
+    sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
+    contentType: text("content_type").notNull(),
+    durationMs: integer("duration_ms"),
+    frameRate: text("frame_rate"),
+    width: integer("width"),
+    height: integer("height"),
+    startTimecode: text("start_timecode"),
+    checksum: text("checksum"),
+    inFrame: integer("in_frame"),
+    outFrame: integer("out_frame"),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex("clips_storage_key").on(t.storageKey),
+    index("clips_episode_idx").on(t.episodeId),
+    index("clips_shot_idx").on(t.shotId),
+    index("clips_channel_state_idx").on(t.channelId, t.state),
+  ],
+);
+
+export const coverageRanges = pgTable(
+  "coverage_ranges",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    clipId: uuid("clip_id").references(() => clips.id, { onDelete: "cascade" }),
+    startFrame: integer("start_frame").notNull(),
+    endFrame: integer("end_frame").notNull(),
+    note: text("note").notNull().default(""),
+    createdAt: createdAt(),
+  },
+  (t) => [index("coverage_ranges_episode_idx").on(t.episodeId), index("coverage_ranges_clip_idx").on(t.clipId), check("coverage_range", sql`${t.endFrame} > ${t.startFrame}`)],
+);
+
+export const shootLogNotes = pgTable(
+  "shoot_log_notes",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    shootDayId: uuid("shoot_day_id").references(() => shootDays.id, { onDelete: "set null" }),
+    stepId: uuid("step_id").references(() => buildSteps.id, { onDelete: "set null" }),
+    segmentId: uuid("segment_id").references(() => scriptSegments.id, { onDelete: "set null" }),
+    authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
+    notedAt: timestamp("noted_at", { withTimezone: true }).notNull().defaultNow(),
+    text: text("text").notNull(),
+  },
+  (t) => [index("shoot_log_notes_episode_idx").on(t.episodeId, t.notedAt)],
+);
+
+/* ───────────── sponsors ───────────── */
+
+export const sponsors = pgTable(
+  "sponsors",
+  {
+    id: id(),
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    contactName: text("contact_name").notNull().default(""),
+    contactEmail: text("contact_email").notNull().default(""),
+    createdAt: createdAt(),
+    archivedAt: timestamp("archived_at", { withTimezone: true }),
+  },
+  (t) => [index("sponsors_channel_idx").on(t.channelId)],
+);
+
+export const deals = pgTable(
+  "deals",
+  {
+    id: id(),
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    sponsorId: uuid("sponsor_id").notNull().references(() => sponsors.id, { onDelete: "cascade" }),
+    episodeId: uuid("episode_id").references(() => episodes.id, { onDelete: "set null" }),
+    title: text("title").notNull(),
+    feeMinor: integer("fee_minor").notNull().default(0),
+    currency: text("currency").notNull().default("USD"),
+    /** proposed | signed | delivered | approved | invoiced | paid | cancelled */
+    status: text("status").notNull().default("proposed"),
+    createdAt: createdAt(),
+    archivedAt: timestamp("archived_at", { withTimezone: true }),
+  },
+  (t) => [index("deals_channel_idx").on(t.channelId), index("deals_sponsor_idx").on(t.sponsorId), index("deals_episode_idx").on(t.episodeId)],
+);
+
+export const deliverables = pgTable(
+  "deliverables",
+  {
+    id: id(),
+    dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
+    segmentId: uuid("segment_id").references(() => scriptSegments.id, { onDelete: "set null" }),
+    /** Placement window on the episode timeline, in seconds from the start. */
+    windowStartSeconds: integer("window_start_seconds"),
+    windowEndSeconds: integer("window_end_seconds"),
+    minSeconds: integer("min_seconds"),
+    maxSeconds: integer("max_seconds"),
+    disclosureRequired: boolean("disclosure_required").notNull().default(true),
+    disclosureText: text("disclosure_text").notNull().default(""),
+    linkUrl: text("link_url"),
+    creditText: text("credit_text").notNull().default(""),
+    /** pending | approved | changes_requested */
+    reviewStatus: text("review_status").notNull().default("pending"),
+    reviewNote: text("review_note").notNull().default(""),
+    reviewedAt: timestamp("reviewed_at", { withTimezone: true }),
+  },
+  (t) => [index("deliverables_deal_idx").on(t.dealId), index("deliverables_segment_idx").on(t.segmentId)],
+);
+
+export const guestLinks = pgTable(
+  "guest_links",
+  {
+    id: id(),
+    dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("guest_links_token_key").on(t.tokenHash), index("guest_links_deal_idx").on(t.dealId)],
+);
+
+export const invoices = pgTable(
+  "invoices",
+  {
+    id: id(),
+    dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
+    amountMinor: integer("amount_minor").notNull(),
+    currency: text("currency").notNull(),
+    providerId: text("provider_id"),
+    /** draft | open | paid | void */
+    status: text("status").notNull().default("draft"),
+    issuedAt: timestamp("issued_at", { withTimezone: true }),
+    paidAt: timestamp("paid_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("invoices_deal_idx").on(t.dealId), uniqueIndex("invoices_provider_key").on(t.providerId)],
+);
+
+/* ───────────── publish package ───────────── */
+
+export const publishPackages = pgTable(
+  "publish_packages",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    description: text("description").notNull().default(""),
+    disclosures: text("disclosures").notNull().default(""),
+    credits: text("credits").notNull().default(""),
+    checklist: jsonb("checklist").$type<Record<string, boolean>>().notNull().default({}),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex("publish_packages_episode_key").on(t.episodeId)],
+);
+
+/* ───────────── mail and audit ───────────── */
+
+/** Messages received by the local SMTP fake (the dev mailbox). */
+export const mailMessages = pgTable(
+  "mail_messages",
+  {
+    id: id(),
+    fromAddress: text("from_address").notNull(),
+    toAddresses: text("to_addresses").array().notNull(),
+    subject: text("subject").notNull().default(""),
+    textBody: text("text_body").notNull().default(""),
+    htmlBody: text("html_body"),
+    receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("mail_messages_received_idx").on(t.receivedAt)],
+);
+
+export const auditEntries = pgTable(
+  "audit_entries",
+  {
+    id: bigint("id", { mode: "number" }).primaryKey().generatedAlwaysAsIdentity(),
+    channelId: uuid("channel_id").references(() => channels.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),
+    action: text("action").notNull(),
+    entity: text("entity").notNull(),
+    entityId: text("entity_id"),
+    before: jsonb("before"),
+    after: jsonb("after"),
+    at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("audit_entries_channel_idx").on(t.channelId, t.at)],
+);
+
+export type User = typeof users.$inferSelect;
+export type Channel = typeof channels.$inferSelect;
+export type Membership = typeof memberships.$inferSelect;
+export type Invitation = typeof invitations.$inferSelect;
+export type Episode = typeof episodes.$inferSelect;
+export type NewEpisode = typeof episodes.$inferInsert;
+export type BuildStep = typeof buildSteps.$inferSelect;
+export type ScriptSegment = typeof scriptSegments.$inferSelect;
+export type Shot = typeof shots.$inferSelect;
+export type Clip = typeof clips.$inferSelect;
+export type MailMessage = typeof mailMessages.$inferSelect;

@@ -1,0 +1,36 @@
+import { z } from "zod";
+import { ROLES } from "../roles";
+
+export const emailSchema = z.string().trim().toLowerCase().pipe(z.email({ message: "must be an e-mail address" }));
+export const passwordSchema = z
+  .string()
+  .min(10, "use at least 10 characters")
+  .max(200, "use at most 200 characters");
+export const rolesSchema = z
+  .array(z.enum(ROLES))
+  .min(1, "choose at least one role")
+  .refine((r) => new Set(r).size === r.length, "list each role once");
+
+export const signInSchema = z.object({ email: emailSchema, password: z.string().min(1, "enter your password") });
+
+export const invitationCreateSchema = z
+  .object({ email: emailSchema, roles: rolesSchema })
+  .strict()
+  .meta({ id: "InvitationCreate" });
+
+export const invitationAcceptSchema = z
+  .object({
+    token: z.string().min(20, "the link is incomplete").max(200),
+    name: z.string().trim().min(1, "tell the team your name").max(80),
+    password: passwordSchema,
+  })
+  .strict()
+  .meta({ id: "InvitationAccept" });
+
+export const resetRequestSchema = z.object({ email: emailSchema }).strict().meta({ id: "PasswordResetRequest" });
+export const resetConfirmSchema = z
+  .object({ token: z.string().min(20, "the link is incomplete").max(200), password: passwordSchema })
+  .strict()
+  .meta({ id: "PasswordResetConfirm" });
+
+export const memberRolesSchema = z.object({ roles: rolesSchema }).strict().meta({ id: "MemberRoles" });

@@ -1,0 +1,124 @@
+import { z } from "zod";
+import { STAGES } from "../stages";
+import { FRAME_RATE_IDS, allowsDropFrame, type FrameRateId } from "../frame-rate";
+
+export const stageSchema = z.enum(STAGES);
+export const frameRateSchema = z.enum(FRAME_RATE_IDS as [FrameRateId, ...FrameRateId[]]);
+
+const isoDate = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "use the form YYYY-MM-DD")
+  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), "is not a real date");
+
+const episodeFields = {
+  title: z.string().trim().min(1, "give the episode a title").max(160, "keep the title under 160 characters"),
+  summary: z.string().trim().max(4000, "keep the summary under 4000 characters"),
+  targetRuntimeSeconds: z
+    .number({ message: "must be a number of seconds" })
+    .int("must be whole seconds")
+    .min(10, "must be at least 10 seconds")
+    .max(6 * 3600, "must be at most 6 hours")
+    .nullable(),
+  publishDate: isoDate.nullable(),
+  frameRate: frameRateSchema,
+  dropFrame: z.boolean(),
+};
+
+function dropFrameRule<T extends { frameRate?: FrameRateId; dropFrame?: boolean }>(v: T, ctx: z.RefinementCtx) {
+  if (v.dropFrame && v.frameRate && !allowsDropFrame(v.frameRate)) {
+    ctx.addIssue({ code: "custom", path: ["dropFrame"], message: "drop-frame applies only at 29.97 and 59.94 fps" });
+  }
+}
+
+/** Body of POST /api/channels/{channelId}/episodes, and the new-episode form. */
+export const episodeCreateSchema = z
+  .object({
+    ...episodeFields,
+    summary: episodeFields.summary.default(""),
+    targetRuntimeSeconds: episodeFields.targetRuntimeSeconds.default(null),
+    publishDate: episodeFields.publishDate.default(null),
+    frameRate: episodeFields.frameRate.default("29.97"),
+    dropFrame: episodeFields.dropFrame.default(false),
+    stage: stageSchema.default("idea"),
+  })
+  .strict()
+  .superRefine(dropFrameRule)
+  .meta({ id: "EpisodeCreate" });
+export type EpisodeCreateInput = z.input<typeof episodeCreateSchema>;
+export type EpisodeCreate = z.output<typeof episodeCreateSchema>;
+
+/** Body of PATCH /api/episodes/{episodeId}: any field, plus a move (stage and/or position). */
+export const episodeUpdateSchema = z
+  .object({
+    title: episodeFields.title,
+    summary: episodeFields.summary,
+    targetRuntimeSeconds: episodeFields.targetRuntimeSeconds,
+    publishDate: episodeFields.publishDate,
+    frameRate: episodeFields.frameRate,
+    dropFrame: episodeFields.dropFrame,
+    stage: stageSchema,
+    position: z.number().int("must be a whole number").min(0, "must be 0 or more").max(100000),
+  })
+  .partial()
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, { message: "send at least one field to change" })
+  .superRefine(dropFrameRule)
+  .meta({ id: "EpisodeUpdate" });
+export type EpisodeUpdate = z.output<typeof episodeUpdateSchema>;
+
+/** Query of GET /api/channels/{channelId}/episodes. */
+export const episodeListQuerySchema = z
+  .object({
+    stage: stageSchema.optional(),
+    month: z.string().regex(/^\d{4}-(0[1-9]|1[0-2])$/, "use the form YYYY-MM").optional(),
+    archived: z.enum(["true", "false"]).optional(),
+  })
+  .strict();
+
+export const episodeSchema = z
+  .object({
+    id: z.string(),
+    channelId: z.string(),
+    title: z.string(),
+    summary: z.string(),
+    stage: stageSchema,
+    position: z.number().int(),
+    targetRuntimeSeconds: z.number().int().nullable(),
+    publishDate: z.string().nullable(),
+    frameRate: frameRateSchema,
+    dropFrame: z.boolean(),
+    createdBy: z.string().nullable(),
+    updatedBy: z.string().nullable(),
+    createdAt: z.string(),
+    updatedAt: z.string(),
+    archivedAt: z.string().nullable(),
+  })
+  .meta({ id: "Episode" });
+export type EpisodeDto = z.infer<typeof episodeSchema>;
+
+/** The form's shape: numbers and dates come from inputs as strings and are mapped before parsing. */
+export const episodeFormSchema = z
+  .object({
+    title: episodeFields.title,
+    summary: episodeFields.summary,
+    targetMinutes: z.string().trim().regex(/^(\d{1,3}(:[0-5]\d)?)?$/, "use minutes or m:ss, e.g. 14:30"),
+    publishDate: z.union([z.literal(""), isoDate]),
+    frameRate: frameRateSchema,
+    dropFrame: z.boolean(),
+  })
+  .superRefine(dropFrameRule);
+export type EpisodeForm = z.infer<typeof episodeFormSchema>;
+
+export function minutesTextToSeconds(text: string): number | null {
+  const t = text.trim();
+  if (!t) return null;
+  const [m, s] = t.split(":");
+  return Number(m) * 60 + (s ? Number(s) : 0);
+}
+
+export function secondsToMinutesText(seconds: number | null): string {
+  if (seconds == null) return "";
+  const m = Math.floor(seconds / 60);
+  const s = seconds % 60;
+  return s ? `${m}:${String(s).padStart(2, "0")}` : String(m);
+}

@@ -1,0 +1,100 @@
+/**
+ * Starts whichever local services the environment does not point elsewhere:
+ * PostgreSQL (DATABASE_URL), the S3 fake (S3_ENDPOINT) and the SMTP fake
+ * (SMTP_URL). Used by `npm start` and by the test harness. Node-only.
+ */
+import path from "node:path";
+import fs from "node:fs";
+import crypto from "node:crypto";
+import { startLocalPostgres } from "../../db/local-postgres";
+import { startLocalS3 } from "../../storage/local-s3";
+import { startLocalSmtp } from "./local-smtp";
+import { runMigrations } from "../../db/migrate";
+
+export interface ServicePorts {
+  postgres: number;
+  s3: number;
+  smtp: number;
+}
+
+export interface StartedServices {
+  env: Record<string, string>;
+  localDatabase: boolean;
+  stop(): Promise<void>;
+}
+
+export async function startLocalServices(opts: {
+  dataRoot: string;
+  ports: ServicePorts;
+  database: string;
+  fast?: boolean;
+  log?: (msg: string) => void;
+}): Promise<StartedServices> {
+  const log = opts.log ?? ((m: string) => console.log(m));
+  const stops: (() => Promise<void>)[] = [];
+  const out: Record<string, string> = {};
+  fs.mkdirSync(opts.dataRoot, { recursive: true });
+
+  try {
+    let databaseUrl = process.env.DATABASE_URL;
+    const localDatabase = !databaseUrl;
+    if (!databaseUrl) {
+      const pgc = await startLocalPostgres({
+        dataDir: path.join(opts.dataRoot, "pg"),
+        port: opts.ports.postgres,
+        database: opts.database,
+        fast: opts.fast,
+      });
+      stops.push(() => pgc.stop());
+      databaseUrl = pgc.url;
+      log(`[postgres] ${pgc.startedHere ? "started" : "already running"} on 127.0.0.1:${pgc.port}`);
+    }
+    out.DATABASE_URL = databaseUrl;
+    await runMigrations(databaseUrl);
+    log("[postgres] migrations applied");
+
+    if (!process.env.S3_ENDPOINT) {
+      const bucket = process.env.S3_BUCKET ?? "jigboard-media";
+      const s3 = await startLocalS3({ directory: path.join(opts.dataRoot, "s3"), port: opts.ports.s3, bucket });
+      stops.push(() => s3.stop());
+      out.S3_ENDPOINT = s3.endpoint;
+      out.S3_BUCKET = bucket;
+      out.S3_ACCESS_KEY_ID = "S3RVER";
+      out.S3_SECRET_ACCESS_KEY = "S3RVER";
+      out.S3_FORCE_PATH_STYLE = "true";
+      log(`[s3] fake store on ${s3.endpoint}, bucket ${bucket}`);
+    }
+
+    if (!process.env.SMTP_URL) {
+      const smtp = await startLocalSmtp({ port: opts.ports.smtp, databaseUrl });
+      stops.push(() => smtp.stop());
+      out.SMTP_URL = smtp.url;
+      out.DEV_MAILBOX = process.env.DEV_MAILBOX ?? "true";
+      log(`[smtp] fake mail server on ${smtp.url}; read messages at /mailbox`);
+    } else if (!process.env.DEV_MAILBOX) {
+      out.DEV_MAILBOX = "false";
+    }
+
+    return {
+      env: out,
+      localDatabase,
+      async stop() {
+        for (const s of stops.reverse()) await s().catch((e: Error) => console.error(e.message));
+      },
+    };
+  } catch (e) {
+    for (const s of stops.reverse()) await s().catch(() => {});
+    throw e;
+  }
+}
+
+/** NEXTAUTH_SECRET from the environment, or generated once into the ignored data folder. */
+export function authSecret(dataRoot: string): string {
+  if (process.env.NEXTAUTH_SECRET) return process.env.NEXTAUTH_SECRET;
+  const file = path.join(dataRoot, "auth-secret");
+  if (fs.existsSync(file)) return fs.readFileSync(file, "utf8").trim();
+  const secret = crypto.randomBytes(32).toString("base64url");
+  fs.mkdirSync(dataRoot, { recursive: true });
+  fs.writeFileSync(file, secret, { mode: 0o600 });
+  return secret;
+}

@@ -1,0 +1,59 @@
+/**
+ * The local SMTP fake: accepts every message on 127.0.0.1 and stores it in
+ * PostgreSQL (mail_messages), where the dev mailbox page reads it. Nothing is
+ * relayed anywhere.
+ */
+import { SMTPServer } from "smtp-server";
+import { simpleParser, type AddressObject } from "mailparser";
+import pg from "pg";
+
+export interface LocalSmtp {
+  url: string;
+  stop(): Promise<void>;
+}
+
+function addresses(a: AddressObject | AddressObject[] | undefined): string[] {
+  const list = Array.isArray(a) ? a : a ? [a] : [];
+  return list.flatMap((o) => o.value.map((v) => v.address ?? "")).filter(Boolean);
+}
+
+export async function startLocalSmtp(opts: { port: number; databaseUrl: string }): Promise<LocalSmtp> {
+  const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 2 });
+  const server = new SMTPServer({
+    authOptional: true,
+    // The bundled self-signed certificate has expired; local plain SMTP only.
+    disabledCommands: ["STARTTLS", "AUTH"],
+    logger: false,
+    size: 10 * 1024 * 1024,
+    onData(stream, session, callback) {
+      simpleParser(stream)
+        .then(async (mail) => {
+          const to = addresses(mail.to);
+          const envelopeTo = session.envelope.rcptTo.map((r) => r.address);
+          await pool.query(
+            "insert into mail_messages (from_address, to_addresses, subject, text_body, html_body) values ($1, $2, $3, $4, $5)",
+            [
+              addresses(mail.from)[0] ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : ""),
+              to.length ? to : envelopeTo,
+              mail.subject ?? "",
+              mail.text ?? "",
+              typeof mail.html === "string" ? mail.html : null,
+            ],
+          );
+          callback();
+        })
+        .catch((err: Error) => callback(err));
+    },
+  });
+  await new Promise<void>((resolve, reject) => {
+    server.once("error", reject);
+    server.listen(opts.port, "127.0.0.1", () => resolve());
+  });
+  return {
+    url: `smtp://127.0.0.1:${opts.port}`,
+    async stop() {
+      await new Promise<void>((r) => server.close(() => r()));
+      await pool.end();
+    },
+  };
+}

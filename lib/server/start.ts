@@ -1,0 +1,99 @@
+/**
+ * `npm start`: local services → migrations → demo seed (once) → build if
+ * needed → `next start` on 127.0.0.1. Ctrl-C or SIGTERM stops everything
+ * this process started; a second start reuses the data in .data/.
+ */
+import { spawn, spawnSync } from "node:child_process";
+import fs from "node:fs";
+import path from "node:path";
+import { drizzle } from "drizzle-orm/node-postgres";
+import pg from "pg";
+import { authSecret, startLocalServices } from "./local-services";
+import { LOCAL_PORTS } from "../env";
+import { seedDemo } from "../../db/seed";
+import * as schema from "../../db/schema";
+
+const root = process.cwd();
+const dataRoot = path.join(root, ".data");
+const port = Number(process.env.PORT ?? 3000);
+const dev = process.argv.includes("--dev");
+
+function newestMtime(dir: string): number {
+  let newest = 0;
+  if (!fs.existsSync(dir)) return 0;
+  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+    if (entry.name === "node_modules" || entry.name.startsWith(".")) continue;
+    const p = path.join(dir, entry.name);
+    newest = Math.max(newest, entry.isDirectory() ? newestMtime(p) : fs.statSync(p).mtimeMs);
+  }
+  return newest;
+}
+
+function buildIsStale(): boolean {
+  const id = path.join(root, ".next", "BUILD_ID");
+  if (!fs.existsSync(id)) return true;
+  const built = fs.statSync(id).mtimeMs;
+  const sources = ["app", "components", "lib", "db", "storage", "public"].map((d) => newestMtime(path.join(root, d)));
+  const configs = ["next.config.mjs", "tailwind.config.ts", "package.json", "tsconfig.json"].map((f) =>
+    fs.existsSync(f) ? fs.statSync(f).mtimeMs : 0,
+  );
+  return Math.max(...sources, ...configs) > built;
+}
+
+async function main() {
+  const services = await startLocalServices({ dataRoot, ports: LOCAL_PORTS, database: "jigboard" });
+  let child: ReturnType<typeof spawn> | undefined;
+  let stopping = false;
+  const shutdown = async (code = 0) => {
+    if (stopping) return;
+    stopping = true;
+    console.log("\n[jigboard] stopping…");
+    if (child?.pid) {
+      try {
+        process.kill(-child.pid, "SIGTERM");
+      } catch {
+        /* already gone */
+      }
+    }
+    await services.stop();
+    process.exit(code);
+  };
+  process.on("SIGINT", () => void shutdown(0));
+  process.on("SIGTERM", () => void shutdown(0));
+
+  const seedWanted = process.env.SEED_DEMO ? /^(1|true|yes)$/i.test(process.env.SEED_DEMO) : services.localDatabase;
+  if (seedWanted) {
+    const pool = new pg.Pool({ connectionString: services.env.DATABASE_URL });
+    const seeded = await seedDemo(drizzle(pool, { schema }));
+    await pool.end();
+    console.log(seeded ? "[seed] demo scenario created" : "[seed] data present, demo not re-seeded");
+  }
+
+  const childEnv = {
+    ...process.env,
+    ...services.env,
+    NEXTAUTH_SECRET: authSecret(dataRoot),
+    NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://127.0.0.1:${port}`,
+    NEXT_TELEMETRY_DISABLED: "1",
+  };
+  const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
+
+  if (!dev && buildIsStale()) {
+    console.log("[jigboard] building (about half a minute)…");
+    const b = spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env: { ...childEnv, NODE_ENV: "production" } });
+    if (b.status !== 0) return shutdown(b.status ?? 1);
+  }
+
+  child = spawn(process.execPath, [nextBin, dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(port)], {
+    stdio: "inherit",
+    env: childEnv,
+    detached: true,
+  });
+  child.on("exit", (code) => void shutdown(code ?? 0));
+  console.log(`[jigboard] serving http://127.0.0.1:${port}`);
+}
+
+main().catch((e) => {
+  console.error(e);
+  process.exit(1);
+});
