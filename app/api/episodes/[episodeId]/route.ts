@@ -1,0 +1,72 @@
+import { json, parseBody, parseId, route, sessionUser } from "@/lib/server/api";
+import { assertCan, assertCanMove, requireChannel } from "@/lib/server/access";
+import { AppError } from "@/lib/server/errors";
+import { episodeUpdateSchema } from "@/lib/schemas/episode";
+import { archiveEpisode, getEpisodeById, toEpisodeDto, updateEpisode } from "@/db/queries/episodes";
+import { recordAudit } from "@/db/queries/audit";
+
+type P = { episodeId: string };
+
+async function load(userId: string, episodeIdRaw: string) {
+  const id = parseId(episodeIdRaw, "episode");
+  const episode = await getEpisodeById({ id });
+  if (!episode) throw new AppError("not_found:episode", "No such episode.");
+  // Not a member of the episode's channel: the episode does not exist for this user.
+  const access = await requireChannel(userId, episode.channelId, "channel.read", "episode");
+  return { episode, access };
+}
+
+export const GET = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { episode } = await load(user.id, params.episodeId);
+  return json({ episode: toEpisodeDto(episode) });
+});
+
+export const PATCH = route<P>(async (req, params) => {
+  const patch = await parseBody(req, episodeUpdateSchema, "episode");
+  const user = await sessionUser(req);
+  const { episode, access } = await load(user.id, params.episodeId);
+  const { stage, position, ...fields } = patch;
+  if (Object.keys(fields).length > 0) assertCan(access, "episode.edit");
+  const result = await updateEpisode({
+    id: episode.id,
+    channelId: episode.channelId,
+    userId: user.id,
+    patch,
+    check: (current) => {
+      if (stage !== undefined || position !== undefined) {
+        assertCanMove(access, current.stage, stage ?? current.stage);
+        if (current.archivedAt) throw new AppError("conflict:episode.archived", "This episode is archived; restore it before moving it.");
+      }
+      const rate = patch.frameRate ?? current.frameRate;
+      const drop = patch.dropFrame ?? current.dropFrame;
+      if (drop && rate !== "29.97" && rate !== "59.94") {
+        throw new AppError("unprocessable:episode.dropFrame", "Drop-frame applies only at 29.97 and 59.94 fps.", {
+          fields: { dropFrame: ["drop-frame applies only at 29.97 and 59.94 fps"] },
+        });
+      }
+    },
+  });
+  if (!result) throw new AppError("not_found:episode", "No such episode.");
+  await recordAudit({
+    channelId: episode.channelId,
+    userId: user.id,
+    action: stage !== undefined || position !== undefined ? "move" : "update",
+    entity: "episode",
+    entityId: episode.id,
+    before: toEpisodeDto(result.before),
+    after: toEpisodeDto(result.after),
+  });
+  return json({ episode: toEpisodeDto(result.after) });
+});
+
+/** Deleting an episode archives it; nothing is destroyed. */
+export const DELETE = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { episode, access } = await load(user.id, params.episodeId);
+  assertCan(access, "episode.archive");
+  const row = await archiveEpisode({ id: episode.id, channelId: episode.channelId, userId: user.id });
+  if (!row) throw new AppError("conflict:episode.archived", "This episode is already archived.");
+  await recordAudit({ channelId: episode.channelId, userId: user.id, action: "archive", entity: "episode", entityId: episode.id });
+  return json({ episode: toEpisodeDto(row) });
+});

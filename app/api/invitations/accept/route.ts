@@ -1,0 +1,25 @@
+import bcrypt from "bcryptjs";
+import { json, parseBody, route } from "@/lib/server/api";
+import { AppError } from "@/lib/server/errors";
+import { invitationAcceptSchema } from "@/lib/schemas/account";
+import { acceptInvitation, getOpenInvitationByTokenHash } from "@/db/queries/auth";
+import { getUserByEmail } from "@/db/queries/users";
+import { hashToken } from "@/lib/server/tokens";
+
+/** Public: the token in the e-mailed link is the credential. */
+export const POST = route(async (req) => {
+  const input = await parseBody(req, invitationAcceptSchema, "invitation");
+  const tokenHash = hashToken(input.token);
+  const inv = await getOpenInvitationByTokenHash({ tokenHash });
+  if (!inv) throw new AppError("not_found:invitation", "This invitation link is unknown, already used or expired. Ask the channel owner for a new one.");
+  const existing = await getUserByEmail({ email: inv.email });
+  if (existing && !(await bcrypt.compare(input.password, existing.passwordHash))) {
+    throw new AppError("unprocessable:invitation.password", "An account with this e-mail already exists: enter its password to join.", {
+      fields: { password: ["enter the password of your existing account"] },
+    });
+  }
+  const passwordHash = existing?.passwordHash ?? (await bcrypt.hash(input.password, 10));
+  const result = await acceptInvitation({ tokenHash, name: input.name, passwordHash });
+  if (!result) throw new AppError("not_found:invitation", "This invitation was used a moment ago.");
+  return json({ email: result.email, channelId: result.channelId }, 201);
+});

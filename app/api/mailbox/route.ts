@@ -1,0 +1,18 @@
+import { z } from "zod";
+import { env } from "@/lib/env";
+import { json, parseQuery, parseId, route, sessionUser } from "@/lib/server/api";
+import { requireChannel } from "@/lib/server/access";
+import { AppError } from "@/lib/server/errors";
+import { listMailMessages } from "@/db/queries/mail";
+
+const query = z.object({ channelId: z.string() }).strict();
+
+/** Dev only: what the local SMTP fake received. Off when DEV_MAILBOX=false. */
+export const GET = route(async (req) => {
+  const q = parseQuery(req, query);
+  if (!env().DEV_MAILBOX) throw new AppError("not_found:mailbox", "The dev mailbox is turned off here.");
+  const user = await sessionUser(req);
+  await requireChannel(user.id, parseId(q.channelId, "channel"), "mailbox.read");
+  const rows = await listMailMessages({ limit: 100 });
+  return json({ messages: rows.map((m) => ({ ...m, receivedAt: m.receivedAt.toISOString() })) });
+});

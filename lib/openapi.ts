@@ -1,0 +1,91 @@
+/**
+ * The OpenAPI 3.1 document, generated from the same zod schemas the routes
+ * parse with (zod's own JSON Schema output). Add a route here when you add a
+ * handler; tests/unit/openapi.test.ts checks that every handler is listed.
+ */
+import { z } from "zod";
+import { errorResponseSchema, okSchema } from "./schemas/common";
+import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
+import { invitationAcceptSchema, invitationCreateSchema, memberRolesSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
+import { ROLES } from "./roles";
+
+type Method = "get" | "post" | "patch" | "delete";
+interface RouteDoc {
+  method: Method;
+  path: string;
+  summary: string;
+  auth?: boolean;
+  body?: z.ZodType;
+  query?: z.ZodObject;
+  response: z.ZodType;
+  status?: number;
+  errors: number[];
+}
+
+const channelSchema = z.object({ id: z.string(), name: z.string(), roles: z.array(z.enum(ROLES)), units: z.string(), currency: z.string() });
+const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), joinedAt: z.string() });
+const invitationSchema = z.object({ id: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), expiresAt: z.string() });
+const mailSchema = z.object({ id: z.string(), fromAddress: z.string(), toAddresses: z.array(z.string()), subject: z.string(), textBody: z.string(), receivedAt: z.string() });
+
+export const ROUTES: RouteDoc[] = [
+  { method: "get", path: "/api/health", summary: "Database and storage status", auth: false, response: z.object({ ok: z.boolean(), database: z.object({ ok: z.boolean() }), storage: z.object({ ok: z.boolean() }) }), errors: [503] },
+  { method: "get", path: "/api/channels", summary: "Channels I belong to, with my roles", response: z.object({ channels: z.array(channelSchema) }), errors: [401] },
+  { method: "get", path: "/api/channels/{channelId}/episodes", summary: "Episodes on the board (filters: stage, publish month, archived)", query: episodeListQuerySchema, response: z.object({ episodes: z.array(episodeSchema) }), errors: [400, 401, 404] },
+  { method: "post", path: "/api/channels/{channelId}/episodes", summary: "Create an episode at the end of its stage", body: episodeCreateSchema, response: z.object({ episode: episodeSchema }), status: 201, errors: [400, 401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}", summary: "One episode", response: z.object({ episode: episodeSchema }), errors: [401, 404] },
+  { method: "patch", path: "/api/episodes/{episodeId}", summary: "Edit fields and/or move (stage, position) in one transaction", body: episodeUpdateSchema, response: z.object({ episode: episodeSchema }), errors: [400, 401, 403, 404, 409, 422] },
+  { method: "delete", path: "/api/episodes/{episodeId}", summary: "Archive an episode", response: z.object({ episode: episodeSchema }), errors: [401, 403, 404, 409] },
+  { method: "get", path: "/api/channels/{channelId}/members", summary: "Members and their roles", response: z.object({ members: z.array(memberSchema) }), errors: [401, 404] },
+  { method: "patch", path: "/api/channels/{channelId}/members/{userId}", summary: "Change a member's roles (owner)", body: memberRolesSchema, response: z.object({ userId: z.string(), roles: z.array(z.enum(ROLES)) }), errors: [400, 401, 403, 404, 409] },
+  { method: "get", path: "/api/channels/{channelId}/invitations", summary: "Open invitations (owner)", response: z.object({ invitations: z.array(invitationSchema) }), errors: [401, 403, 404] },
+  { method: "post", path: "/api/channels/{channelId}/invitations", summary: "Invite an e-mail address with roles (owner); sends the link by e-mail", body: invitationCreateSchema, response: z.object({ invitation: invitationSchema }), status: 201, errors: [400, 401, 403, 404] },
+  { method: "delete", path: "/api/channels/{channelId}/invitations/{invitationId}", summary: "Revoke an open invitation (owner)", response: okSchema, errors: [401, 403, 404] },
+  { method: "post", path: "/api/invitations/accept", summary: "Accept an invitation: set name and password, join the channel", auth: false, body: invitationAcceptSchema, response: z.object({ email: z.string(), channelId: z.string() }), status: 201, errors: [400, 404, 422] },
+  { method: "post", path: "/api/password-reset", summary: "Send a password-reset link (same answer whether or not the account exists)", auth: false, body: resetRequestSchema, response: okSchema, status: 202, errors: [400] },
+  { method: "post", path: "/api/password-reset/confirm", summary: "Set a new password with a reset token", auth: false, body: resetConfirmSchema, response: okSchema, errors: [400, 404] },
+  { method: "get", path: "/api/mailbox", summary: "Dev mailbox: messages the local SMTP fake received (owner; dev only)", query: z.object({ channelId: z.string() }), response: z.object({ messages: z.array(mailSchema) }), errors: [400, 401, 403, 404] },
+  { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
+  { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
+];
+
+const STATUS_TEXT: Record<number, string> = { 400: "Bad input", 401: "Not signed in", 403: "Role does not allow this", 404: "Not found (or another channel's)", 409: "Conflict", 422: "Cannot be processed", 429: "Too many attempts", 503: "Unavailable" };
+
+function schemaOf(s: z.ZodType, io: "input" | "output") {
+  const out = z.toJSONSchema(s, { io, unrepresentable: "any" }) as Record<string, unknown>;
+  delete out.$schema;
+  return out;
+}
+
+export function openApiDocument() {
+  const paths: Record<string, Record<string, unknown>> = {};
+  for (const r of ROUTES) {
+    const params = [...r.path.matchAll(/\{(\w+)\}/g)].map((m) => ({ name: m[1], in: "path", required: true, schema: { type: "string", format: "uuid" } }));
+    const queryParams = r.query
+      ? Object.entries(r.query.shape).map(([name, s]) => ({ name, in: "query", required: !(s as z.ZodType).safeParse(undefined).success, schema: schemaOf(s as z.ZodType, "input") }))
+      : [];
+    const responses: Record<string, unknown> = {
+      [String(r.status ?? 200)]: { description: "OK", content: { "application/json": { schema: schemaOf(r.response, "output") } } },
+    };
+    for (const code of r.errors) {
+      responses[String(code)] = { description: STATUS_TEXT[code] ?? "Error", content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } } };
+    }
+    (paths[r.path] ??= {})[r.method] = {
+      summary: r.summary,
+      ...(r.auth === false ? { security: [] } : {}),
+      parameters: [...params, ...queryParams],
+      ...(r.body ? { requestBody: { required: true, content: { "application/json": { schema: schemaOf(r.body, "input") } } } } : {}),
+      responses,
+    };
+  }
+  return {
+    openapi: "3.1.0",
+    info: { title: "Jigboard API", version: "0.1.0", description: "Errors always answer { error: { code, message, fields? } }." },
+    servers: [{ url: "/" }],
+    components: {
+      schemas: { Error: schemaOf(errorResponseSchema, "output") },
+      securitySchemes: { session: { type: "apiKey", in: "cookie", name: "next-auth.session-token" } },
+    },
+    security: [{ session: [] }],
+    paths,
+  };
+}

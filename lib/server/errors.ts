@@ -1,0 +1,66 @@
+import { z } from "zod";
+
+const STATUS = {
+  validation: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  unprocessable: 422,
+  rate_limited: 429,
+  internal: 500,
+} as const;
+export type ErrorKind = keyof typeof STATUS;
+
+/**
+ * The one application error. `code` reads like "forbidden:episode"; the kind
+ * before the colon decides the HTTP status. Messages are safe to show.
+ */
+export class AppError extends Error {
+  readonly kind: ErrorKind;
+  readonly code: string;
+  readonly fields?: Record<string, string[]>;
+  readonly headers?: Record<string, string>;
+
+  constructor(code: `${ErrorKind}${string}`, message: string, opts: { fields?: Record<string, string[]>; headers?: Record<string, string> } = {}) {
+    super(message);
+    this.code = code;
+    this.kind = code.split(":")[0] as ErrorKind;
+    this.fields = opts.fields;
+    this.headers = opts.headers;
+  }
+
+  get status(): number {
+    return STATUS[this.kind] ?? 500;
+  }
+}
+
+export function fieldsFromZod(error: z.ZodError): Record<string, string[]> {
+  const fields: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length ? issue.path.join(".") : "_";
+    (fields[key] ??= []).push(issue.message);
+  }
+  return fields;
+}
+
+export function validationError(error: z.ZodError, what = "request"): AppError {
+  const fields = fieldsFromZod(error);
+  const summary = Object.entries(fields)
+    .map(([k, v]) => (k === "_" ? v.join("; ") : `${k}: ${v.join("; ")}`))
+    .join(", ");
+  return new AppError(`validation:${what}`, `Check the ${what}: ${summary}`, { fields });
+}
+
+export function errorBody(e: AppError) {
+  return { error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}) } };
+}
+
+export function toResponse(e: unknown): Response {
+  if (e instanceof AppError) {
+    return Response.json(errorBody(e), { status: e.status, headers: e.headers });
+  }
+  // Database and other unexpected errors are logged, never returned.
+  console.error("[api] unexpected error", e);
+  return Response.json({ error: { code: "internal", message: "Something went wrong on our side. Try again." } }, { status: 500 });
+}
