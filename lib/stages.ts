@@ -21,3 +21,14 @@ export const EDITING_STAGES: readonly Stage[] = ["editing", "review"];
 export function isStage(value: unknown): value is Stage {
   return typeof value === "string" && (STAGES as readonly string[]).includes(value);
 }
+
+/** Secondary cue only: stages are told apart by name and position first (WCAG 1.4.1). */
+export const STAGE_COLOURS: Record<Stage, string> = {
+  idea: "#8a7a5c",
+  planning: "#5f7a4e",
+  shooting: "#a4572f",
+  editing: "#4b6587",
+  review: "#7a5a86",
+  scheduled: "#2f7a78",
+  published: "#3e4a3d",
+};

@@ -1,0 +1,6 @@
+import { ResetForm } from "@/components/auth/reset-form";
+export const metadata = { title: "New password" };
+export default async function ResetPage({ params }: { params: Promise<{ token: string }> }) {
+  const { token } = await params;
+  return <ResetForm token={token} />;
+}

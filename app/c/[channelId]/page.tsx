@@ -1,0 +1,12 @@
+import { pageAccess } from "@/lib/server/page-access";
+import { listEpisodesByChannel, toEpisodeDto } from "@/db/queries/episodes";
+import { Board } from "@/components/board/board";
+
+export const metadata = { title: "Episodes" };
+
+export default async function BoardPage({ params }: { params: Promise<{ channelId: string }> }) {
+  const { channelId } = await params;
+  const access = await pageAccess(channelId, "channel.read", `/c/${channelId}`);
+  const rows = await listEpisodesByChannel({ channelId: access.channelId });
+  return <Board channelId={access.channelId} roles={access.roles} initial={rows.map(toEpisodeDto)} />;
+}

@@ -1,0 +1,51 @@
+import Link from "next/link";
+import { ChannelSwitcher } from "./channel-switcher";
+import { ROLE_LABELS, type Role } from "@/lib/roles";
+import { can } from "@/lib/permissions";
+
+export function AppHeader({
+  channelId,
+  channels,
+  userName,
+  roles,
+  mailbox,
+}: {
+  channelId: string;
+  channels: { id: string; name: string }[];
+  userName: string;
+  roles: Role[];
+  mailbox: boolean;
+}) {
+  const link = "rounded-plank px-2 py-1 text-timber-100 hover:bg-walnut-700 hover:text-white";
+  return (
+    <header className="bg-walnut-900 text-timber-50">
+      <div className="mx-auto flex max-w-[1600px] flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
+        <Link href={`/c/${channelId}`} className="text-lg font-bold tracking-tight">
+          Jigboard
+        </Link>
+        <ChannelSwitcher channels={channels} current={channelId} />
+        <nav aria-label="Channel" className="flex gap-1 text-sm">
+          <Link className={link} href={`/c/${channelId}`}>
+            Episodes
+          </Link>
+          <Link className={link} href={`/c/${channelId}/members`}>
+            People
+          </Link>
+          {mailbox && can(roles, "mailbox.read") ? (
+            <Link className={link} href={`/c/${channelId}/mailbox`}>
+              Dev mailbox
+            </Link>
+          ) : null}
+        </nav>
+        <div className="ml-auto flex items-center gap-3 text-sm">
+          <span>
+            {userName} <span className="text-timber-300">· {roles.map((r) => ROLE_LABELS[r]).join(", ")}</span>
+          </span>
+          <Link className={link} href="/sign-out">
+            Sign out
+          </Link>
+        </div>
+      </div>
+    </header>
+  );
+}

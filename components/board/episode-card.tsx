@@ -1,0 +1,189 @@
+"use client";
+import Link from "next/link";
+import { useEffect, useRef, useState } from "react";
+import { useSortable } from "@dnd-kit/sortable";
+import { CSS } from "@dnd-kit/utilities";
+import { format, parseISO } from "date-fns";
+import type { EpisodeDto } from "@/lib/schemas/episode";
+import { STAGES, STAGE_COLOURS, STAGE_INFO, type Stage } from "@/lib/stages";
+import { can, canMoveEpisode } from "@/lib/permissions";
+import type { Role } from "@/lib/roles";
+import { ROLE_LABELS } from "@/lib/roles";
+
+function runtime(seconds: number | null) {
+  if (seconds == null) return "—";
+  return `${Math.floor(seconds / 60)}:${String(seconds % 60).padStart(2, "0")}`;
+}
+
+export interface MoveRequest {
+  id: string;
+  stage: Stage;
+  /** Index among the column's cards as shown. */
+  index: number;
+}
+
+export function EpisodeCard({
+  episode,
+  channelId,
+  roles,
+  indexInColumn,
+  columnLength,
+  onMove,
+}: {
+  episode: EpisodeDto;
+  channelId: string;
+  roles: Role[];
+  indexInColumn: number;
+  columnLength: number;
+  onMove: (m: MoveRequest) => void;
+}) {
+  const draggable = can(roles, "episode.move");
+  const { attributes, listeners, setNodeRef, transform, transition, isDragging } = useSortable({
+    id: episode.id,
+    disabled: !draggable,
+    data: { stage: episode.stage },
+  });
+  const [open, setOpen] = useState(false);
+  const trigger = useRef<HTMLButtonElement>(null);
+  const menu = useRef<HTMLDivElement>(null);
+
+  useEffect(() => {
+    if (open) menu.current?.querySelector<HTMLButtonElement>("button:not([disabled])")?.focus();
+  }, [open]);
+
+  const close = () => {
+    setOpen(false);
+    trigger.current?.focus();
+  };
+  const go = (m: MoveRequest) => {
+    setOpen(false);
+    onMove(m);
+    trigger.current?.focus();
+  };
+
+  const moveAllowed = (to: Stage) => canMoveEpisode(roles, episode.stage, to);
+  const style = { transform: CSS.Transform.toString(transform), transition };
+
+  return (
+    <li
+      ref={setNodeRef}
+      style={style}
+      data-testid="episode-card"
+      data-episode-id={episode.id}
+      className={`relative rounded-plank border border-timber-300 bg-white shadow-[0_1px_0_#d5bd93] ${isDragging ? "opacity-60 ring-2 ring-chalk-600" : ""}`}
+    >
+      <div className="flex">
+        <span aria-hidden className="w-1.5 shrink-0 rounded-l-plank" style={{ background: STAGE_COLOURS[episode.stage] }} />
+        <div className="min-w-0 flex-1 p-2.5">
+          <div className="flex items-start gap-2">
+            {draggable ? (
+              <button
+                type="button"
+                className="-ml-1 mt-0.5 cursor-grab rounded-plank px-1 text-walnut-500 hover:bg-timber-100 active:cursor-grabbing"
+                aria-label={`Drag ${episode.title}. Press space to pick up, arrows to move, space to drop.`}
+                {...attributes}
+                {...listeners}
+              >
+                <svg width="10" height="16" viewBox="0 0 10 16" aria-hidden>
+                  {[2, 8, 14].map((y) => (
+                    <g key={y}>
+                      <circle cx="2.5" cy={y} r="1.4" fill="currentColor" />
+                      <circle cx="7.5" cy={y} r="1.4" fill="currentColor" />
+                    </g>
+                  ))}
+                </svg>
+              </button>
+            ) : null}
+            <Link href={`/c/${channelId}/episodes/${episode.id}`} className="min-w-0 flex-1 font-medium leading-snug hover:underline">
+              {episode.title}
+            </Link>
+          </div>
+          <dl className="mt-2 grid grid-cols-2 gap-x-3 gap-y-0.5 text-xs text-walnut-700">
+            <div className="flex gap-1">
+              <dt>Publish</dt>
+              <dd className="num whitespace-nowrap">{episode.publishDate ? format(parseISO(episode.publishDate), "d MMM yy") : "—"}</dd>
+            </div>
+            <div className="flex gap-1">
+              <dt>Target</dt>
+              <dd className="num">{runtime(episode.targetRuntimeSeconds)}</dd>
+            </div>
+            {/* Figures filled in as the script, shots, coverage and sponsor work land. */}
+            <div className="flex gap-1" title="Estimated script runtime against target">
+              <dt>Script</dt>
+              <dd className="num">—</dd>
+            </div>
+            <div className="flex gap-1" title="Shots captured of planned">
+              <dt>Shots</dt>
+              <dd className="num">—</dd>
+            </div>
+            <div className="flex gap-1" title="Open B-roll gaps">
+              <dt>Gaps</dt>
+              <dd className="num">—</dd>
+            </div>
+            <div className="flex gap-1" title="Sponsor sign-off">
+              <dt>Sponsor</dt>
+              <dd>—</dd>
+            </div>
+          </dl>
+          <div className="mt-2 flex justify-end">
+            <button
+              ref={trigger}
+              type="button"
+              aria-haspopup="true"
+              aria-expanded={open}
+              onClick={() => setOpen((o) => !o)}
+              className="rounded-plank border border-timber-300 px-2 py-0.5 text-xs hover:bg-timber-100"
+            >
+              Move to…
+            </button>
+          </div>
+        </div>
+      </div>
+      {open ? (
+        <div
+          ref={menu}
+          role="group"
+          aria-label={`Move ${episode.title}`}
+          onKeyDown={(e) => e.key === "Escape" && close()}
+          className="absolute right-1 top-full z-20 mt-1 w-60 rounded-plank border border-walnut-700 bg-timber-50 p-2 text-sm shadow-lg"
+        >
+          {!draggable ? (
+            <p className="p-1 text-walnut-800" data-testid="move-refused">
+              Your role ({roles.map((r) => ROLE_LABELS[r]).join(", ")}) can read the board but not move episodes. Ask a presenter, a producer or the owner.
+            </p>
+          ) : (
+            <>
+              <div className="mb-1 flex gap-1">
+                <button type="button" className="flex-1 rounded-plank border border-timber-300 px-2 py-1 hover:bg-white disabled:opacity-40" disabled={indexInColumn === 0 || !moveAllowed(episode.stage)} onClick={() => go({ id: episode.id, stage: episode.stage, index: indexInColumn - 1 })}>
+                  Up one
+                </button>
+                <button type="button" className="flex-1 rounded-plank border border-timber-300 px-2 py-1 hover:bg-white disabled:opacity-40" disabled={indexInColumn >= columnLength - 1 || !moveAllowed(episode.stage)} onClick={() => go({ id: episode.id, stage: episode.stage, index: indexInColumn + 1 })}>
+                  Down one
+                </button>
+              </div>
+              <ul className="space-y-0.5">
+                {STAGES.filter((s) => s !== episode.stage).map((s) => (
+                  <li key={s}>
+                    <button
+                      type="button"
+                      disabled={!moveAllowed(s)}
+                      title={moveAllowed(s) ? undefined : "Your role cannot move episodes to this stage"}
+                      onClick={() => go({ id: episode.id, stage: s, index: Number.MAX_SAFE_INTEGER })}
+                      className="flex w-full items-center gap-2 rounded-plank px-2 py-1 text-left hover:bg-white disabled:cursor-not-allowed disabled:opacity-40"
+                    >
+                      <span className="num w-4 text-walnut-600">{STAGE_INFO[s].step}</span>
+                      {STAGE_INFO[s].label}
+                    </button>
+                  </li>
+                ))}
+              </ul>
+            </>
+          )}
+          <button type="button" onClick={close} className="mt-1 w-full rounded-plank px-2 py-1 text-xs text-walnut-700 hover:bg-white">
+            Close
+          </button>
+        </div>
+      ) : null}
+    </li>
+  );
+}

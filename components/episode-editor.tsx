@@ -1,0 +1,65 @@
+"use client";
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import type { EpisodeDto } from "@/lib/schemas/episode";
+import { EpisodeForm } from "./episode-form";
+import { Button } from "./ui/button";
+import { Notice } from "./ui/field";
+import { ApiError, episodesApi } from "./board/api";
+
+export function EpisodeEditor({ episode, canEdit, canArchive, channelId }: { episode: EpisodeDto; canEdit: boolean; canArchive: boolean; channelId: string }) {
+  const router = useRouter();
+  const [error, setError] = useState<string | null>(null);
+  const [confirming, setConfirming] = useState(false);
+  if (!canEdit) {
+    return <Notice>Your role reads this episode; a presenter, producer or the owner edits it.</Notice>;
+  }
+  return (
+    <div className="space-y-4">
+      <EpisodeForm
+        mode="edit"
+        initial={episode}
+        onSubmit={async (values) => {
+          try {
+            const ep = await episodesApi.update(episode.id, values);
+            router.refresh();
+            return { ok: true, episode: ep };
+          } catch (e) {
+            return e instanceof ApiError ? { ok: false, message: e.message, fields: e.fields } : { ok: false, message: "The server could not be reached." };
+          }
+        }}
+      />
+      {canArchive && !episode.archivedAt ? (
+        <div className="border-t border-timber-200 pt-4">
+          {error ? <Notice tone="error">{error}</Notice> : null}
+          {confirming ? (
+            <div className="flex flex-wrap items-center gap-2">
+              <span className="text-sm">Archive “{episode.title}”? It leaves the board; nothing is deleted.</span>
+              <Button
+                variant="danger"
+                onClick={async () => {
+                  try {
+                    await episodesApi.archive(episode.id);
+                    router.push(`/c/${channelId}`);
+                    router.refresh();
+                  } catch (e) {
+                    setError(e instanceof Error ? e.message : "Could not archive.");
+                  }
+                }}
+              >
+                Yes, archive
+              </Button>
+              <Button variant="quiet" onClick={() => setConfirming(false)}>
+                Keep it
+              </Button>
+            </div>
+          ) : (
+            <Button variant="danger" onClick={() => setConfirming(true)}>
+              Archive episode
+            </Button>
+          )}
+        </div>
+      ) : null}
+    </div>
+  );
+}
