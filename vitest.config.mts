@@ -14,7 +14,8 @@ export default defineConfig({
   test: {
     include: ["tests/unit/**/*.test.ts", "tests/integration/**/*.test.ts"],
     exclude: ["tests/e2e/**", "node_modules/**"],
-    globalSetup: ["tests/support/global-setup.ts"],
+    setupFiles: ["tests/support/setup.ts"],
+    // Integration files share one database; run files one after another.
     fileParallelism: false,
     testTimeout: 30_000,
     hookTimeout: 60_000,

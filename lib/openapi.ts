@@ -50,13 +50,25 @@ export const ROUTES: RouteDoc[] = [
 
 const STATUS_TEXT: Record<number, string> = { 400: "Bad input", 401: "Not signed in", 403: "Role does not allow this", 404: "Not found (or another channel's)", 409: "Conflict", 422: "Cannot be processed", 429: "Too many attempts", 503: "Unavailable" };
 
+const components: Record<string, unknown> = {};
+
+/** zod's JSON Schema output, with named schemas (.meta({ id })) lifted into components. */
 function schemaOf(s: z.ZodType, io: "input" | "output") {
   const out = z.toJSONSchema(s, { io, unrepresentable: "any" }) as Record<string, unknown>;
   delete out.$schema;
-  return out;
+  const defs = (out.$defs ?? {}) as Record<string, unknown>;
+  delete out.$defs;
+  const rewrite = <T>(v: T): T => JSON.parse(JSON.stringify(v).replaceAll('"#/$defs/', '"#/components/schemas/'));
+  for (const [name, def] of Object.entries(defs)) {
+    // Input and output shapes differ where defaults apply; name them apart.
+    const key = io === "input" && components[name] && JSON.stringify(components[name]) !== JSON.stringify(rewrite(def)) ? `${name}Input` : name;
+    components[key] = rewrite(def);
+  }
+  return rewrite(out);
 }
 
 export function openApiDocument() {
+  schemaOf(errorResponseSchema, "output");
   const paths: Record<string, Record<string, unknown>> = {};
   for (const r of ROUTES) {
     const params = [...r.path.matchAll(/\{(\w+)\}/g)].map((m) => ({ name: m[1], in: "path", required: true, schema: { type: "string", format: "uuid" } }));
@@ -82,7 +94,7 @@ export function openApiDocument() {
     info: { title: "Jigboard API", version: "0.1.0", description: "Errors always answer { error: { code, message, fields? } }." },
     servers: [{ url: "/" }],
     components: {
-      schemas: { Error: schemaOf(errorResponseSchema, "output") },
+      schemas: { ...components },
       securitySchemes: { session: { type: "apiKey", in: "cookie", name: "next-auth.session-token" } },
     },
     security: [{ session: [] }],

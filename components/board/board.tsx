@@ -264,7 +264,7 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
           },
         }}
       >
-        <div className="bench grid grid-cols-1 gap-3 md:grid-cols-none md:auto-cols-[minmax(13.5rem,1fr)] md:grid-flow-col md:overflow-x-auto md:pb-2">
+        <div className="bench grid grid-cols-1 gap-3 md:grid-cols-none md:auto-cols-[minmax(11.25rem,1fr)] md:grid-flow-col md:overflow-x-auto md:pb-2">
           {shownStages.map((stage) => {
             const shown = columns[stage].filter(visible);
             return (

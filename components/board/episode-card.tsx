@@ -98,32 +98,27 @@ export function EpisodeCard({
               {episode.title}
             </Link>
           </div>
-          <dl className="mt-2 grid grid-cols-2 gap-x-3 gap-y-0.5 text-xs text-walnut-700">
-            <div className="flex gap-1">
-              <dt>Publish</dt>
-              <dd className="num whitespace-nowrap">{episode.publishDate ? format(parseISO(episode.publishDate), "d MMM yy") : "—"}</dd>
-            </div>
-            <div className="flex gap-1">
-              <dt>Target</dt>
-              <dd className="num">{runtime(episode.targetRuntimeSeconds)}</dd>
-            </div>
-            {/* Figures filled in as the script, shots, coverage and sponsor work land. */}
-            <div className="flex gap-1" title="Estimated script runtime against target">
-              <dt>Script</dt>
-              <dd className="num">—</dd>
-            </div>
-            <div className="flex gap-1" title="Shots captured of planned">
-              <dt>Shots</dt>
-              <dd className="num">—</dd>
-            </div>
-            <div className="flex gap-1" title="Open B-roll gaps">
-              <dt>Gaps</dt>
-              <dd className="num">—</dd>
-            </div>
-            <div className="flex gap-1" title="Sponsor sign-off">
-              <dt>Sponsor</dt>
-              <dd>—</dd>
-            </div>
+          <p className="mt-1.5 flex flex-wrap gap-x-3 text-xs text-walnut-700">
+            <span>
+              Publish <span className="num whitespace-nowrap text-walnut-900">{episode.publishDate ? format(parseISO(episode.publishDate), "d MMM yy") : "—"}</span>
+            </span>
+            <span>
+              Target <span className="num text-walnut-900">{runtime(episode.targetRuntimeSeconds)}</span>
+            </span>
+          </p>
+          {/* Progress figures, filled in as the script, shots, coverage and sponsor work land. */}
+          <dl className="mt-1.5 grid grid-cols-4 divide-x divide-timber-200 rounded-plank border border-timber-200 text-center">
+            {[
+              ["Script", "Estimated script runtime against target"],
+              ["Shots", "Shots captured of planned"],
+              ["Gaps", "Open B-roll gaps"],
+              ["Sponsor", "Sponsor sign-off"],
+            ].map(([label, title]) => (
+              <div key={label} title={title} className="px-0.5 py-0.5">
+                <dt className="text-[10px] uppercase tracking-wide text-walnut-600">{label}</dt>
+                <dd className="num text-xs">—</dd>
+              </div>
+            ))}
           </dl>
           <div className="mt-2 flex justify-end">
             <button
@@ -145,7 +140,7 @@ export function EpisodeCard({
           role="group"
           aria-label={`Move ${episode.title}`}
           onKeyDown={(e) => e.key === "Escape" && close()}
-          className="absolute right-1 top-full z-20 mt-1 w-60 rounded-plank border border-walnut-700 bg-timber-50 p-2 text-sm shadow-lg"
+          className="absolute left-1 right-1 top-full z-20 mt-1 min-w-44 rounded-plank border border-walnut-700 bg-timber-50 p-2 text-sm shadow-lg"
         >
           {!draggable ? (
             <p className="p-1 text-walnut-800" data-testid="move-refused">

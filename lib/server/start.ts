@@ -4,11 +4,11 @@
  * this process started; a second start reuses the data in .data/.
  */
 import { spawn, spawnSync } from "node:child_process";
-import fs from "node:fs";
 import path from "node:path";
 import { drizzle } from "drizzle-orm/node-postgres";
 import pg from "pg";
 import { authSecret, startLocalServices } from "./local-services";
+import { buildIsStale } from "./build-check";
 import { LOCAL_PORTS } from "../env";
 import { seedDemo } from "../../db/seed";
 import * as schema from "../../db/schema";
@@ -17,28 +17,6 @@ const root = process.cwd();
 const dataRoot = path.join(root, ".data");
 const port = Number(process.env.PORT ?? 3000);
 const dev = process.argv.includes("--dev");
-
-function newestMtime(dir: string): number {
-  let newest = 0;
-  if (!fs.existsSync(dir)) return 0;
-  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-    if (entry.name === "node_modules" || entry.name.startsWith(".")) continue;
-    const p = path.join(dir, entry.name);
-    newest = Math.max(newest, entry.isDirectory() ? newestMtime(p) : fs.statSync(p).mtimeMs);
-  }
-  return newest;
-}
-
-function buildIsStale(): boolean {
-  const id = path.join(root, ".next", "BUILD_ID");
-  if (!fs.existsSync(id)) return true;
-  const built = fs.statSync(id).mtimeMs;
-  const sources = ["app", "components", "lib", "db", "storage", "public"].map((d) => newestMtime(path.join(root, d)));
-  const configs = ["next.config.mjs", "tailwind.config.ts", "package.json", "tsconfig.json"].map((f) =>
-    fs.existsSync(f) ? fs.statSync(f).mtimeMs : 0,
-  );
-  return Math.max(...sources, ...configs) > built;
-}
 
 async function main() {
   const services = await startLocalServices({ dataRoot, ports: LOCAL_PORTS, database: "jigboard" });
@@ -78,7 +56,7 @@ async function main() {
   };
   const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
 
-  if (!dev && buildIsStale()) {
+  if (!dev && buildIsStale(root)) {
     console.log("[jigboard] building (about half a minute)…");
     const b = spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env: { ...childEnv, NODE_ENV: "production" } });
     if (b.status !== 0) return shutdown(b.status ?? 1);

@@ -1,0 +1,79 @@
+/**
+ * Against the production build that `npm test` serves: real next-auth
+ * sign-in, the PostgreSQL-backed throttle, health and OpenAPI.
+ */
+import { describe, expect, it } from "vitest";
+import { makeWorld, PASSWORD } from "../support/fixtures";
+
+const BASE = process.env.JIGBOARD_TEST_URL ?? "http://127.0.0.1:3100";
+
+async function signIn(email: string, password: string, address = "203.0.113.7") {
+  const csrfRes = await fetch(`${BASE}/api/auth/csrf`);
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+  const cookie = csrfRes.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const res = await fetch(`${BASE}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie, "x-forwarded-for": address },
+    body: new URLSearchParams({ email, password, csrfToken, json: "true" }),
+  });
+  const session = res.headers.getSetCookie().find((c) => c.startsWith("next-auth.session-token="));
+  return { status: res.status, session: session?.split(";")[0], body: await res.text() };
+}
+
+describe("served app", () => {
+  it("health reports database and storage", async () => {
+    const r = await fetch(`${BASE}/api/health`);
+    expect(r.status).toBe(200);
+    expect(await r.json()).toEqual({ ok: true, database: { ok: true }, storage: { ok: true } });
+  });
+
+  it("serves the OpenAPI document", async () => {
+    const doc = (await (await fetch(`${BASE}/api/openapi.json`)).json()) as { openapi: string; paths: Record<string, unknown> };
+    expect(doc.openapi).toBe("3.1.0");
+    expect(Object.keys(doc.paths)).toEqual(expect.arrayContaining(["/api/channels", "/api/episodes/{episodeId}", "/api/health"]));
+  });
+
+  it("every demo account signs in, and the session opens the API", async () => {
+    for (const who of ["owner", "presenter", "editor", "producer", "sponsors", "outsider"]) {
+      const r = await signIn(`${who}@jigboard.example`, "jigboard-demo", `198.51.100.${who.length}`);
+      expect(r.session, who).toBeTruthy();
+      const channels = await fetch(`${BASE}/api/channels`, { headers: { cookie: r.session! } });
+      expect(channels.status).toBe(200);
+      const body = (await channels.json()) as { channels: { name: string }[] };
+      expect(body.channels.length).toBe(1);
+    }
+  });
+
+  it("unauthenticated API calls are 401 over HTTP too", async () => {
+    const r = await fetch(`${BASE}/api/channels`);
+    expect(r.status).toBe(401);
+    expect(((await r.json()) as { error: { code: string } }).error.code).toBe("unauthenticated");
+  });
+
+  it("throttles failed sign-ins per account with 429 and Retry-After", async () => {
+    const w = await makeWorld();
+    const email = w.members.editor.email;
+    for (let i = 0; i < 5; i++) {
+      const r = await signIn(email, "wrong-password", `192.0.2.${10 + i}`);
+      expect(r.session).toBeUndefined();
+    }
+    const blocked = await signIn(email, PASSWORD, "192.0.2.99");
+    expect(blocked.status).toBe(429);
+    const body = JSON.parse(blocked.body) as { error: { code: string; message: string } };
+    expect(body.error.code).toBe("rate_limited:sign-in");
+    expect(body.error.message).toMatch(/Try again in \d+ seconds/);
+    // Another account from another address is unaffected.
+    const other = await signIn(w.members.producer.email, PASSWORD, "192.0.2.100");
+    expect(other.session).toBeTruthy();
+  });
+
+  it("throttles per address across accounts", async () => {
+    const w = await makeWorld();
+    const addr = "192.0.2.200";
+    const emails = Object.values(w.members).map((m) => m.email);
+    for (let i = 0; i < 5; i++) await signIn(emails[i % emails.length]!, "wrong", addr);
+    const blocked = await signIn(w.members.owner.email, PASSWORD, addr);
+    expect(blocked.status).toBe(429);
+  });
+});
