@@ -19,7 +19,7 @@ const root = process.cwd();
 const dataRoot = path.join(root, ".test-data");
 const artifacts = path.join(root, "tests", ".artifacts");
 const appPort = Number(process.env.TEST_APP_PORT ?? 3100);
-const only = process.argv.slice(2); // e.g. "unit", "integration", "e2e"
+const only = process.argv.slice(2); // any of "static", "unit", "integration", "e2e"
 const want = (suite: string) => only.length === 0 || only.includes(suite);
 
 // Tests always use their own local services, never a configured real one.
@@ -113,6 +113,19 @@ async function main() {
       });
       await waitFor(`http://127.0.0.1:${appPort}/api/health`, 60_000);
       console.log(`[test] app on http://127.0.0.1:${appPort}`);
+    }
+
+    if (want("static")) {
+      // Type check and lint count as one check each.
+      for (const [name, args] of [
+        ["typecheck", [path.join(root, "node_modules", "typescript", "bin", "tsc"), "--noEmit", "-p", "."]],
+        ["lint", [path.join(root, "node_modules", "eslint", "bin", "eslint.js"), "."]],
+      ] as const) {
+        const code = await run(process.execPath, [...args], env);
+        console.log(`[test] ${name}: ${code === 0 ? "passed" : "failed"}`);
+        if (code === 0) totals.passed += 1;
+        else totals.failed += 1;
+      }
     }
 
     const vitestSuites = ["unit", "integration"].filter(want);

@@ -20,15 +20,15 @@ const dev = process.argv.includes("--dev");
 
 async function main() {
   const services = await startLocalServices({ dataRoot, ports: LOCAL_PORTS, database: "jigboard" });
-  let child: ReturnType<typeof spawn> | undefined;
+  const running: { child?: ReturnType<typeof spawn> } = {};
   let stopping = false;
   const shutdown = async (code = 0) => {
     if (stopping) return;
     stopping = true;
     console.log("\n[jigboard] stopping…");
-    if (child?.pid) {
+    if (running.child?.pid) {
       try {
-        process.kill(-child.pid, "SIGTERM");
+        process.kill(-running.child.pid, "SIGTERM");
       } catch {
         /* already gone */
       }
@@ -62,11 +62,12 @@ async function main() {
     if (b.status !== 0) return shutdown(b.status ?? 1);
   }
 
-  child = spawn(process.execPath, [nextBin, dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(port)], {
+  const child = spawn(process.execPath, [nextBin, dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(port)], {
     stdio: "inherit",
     env: childEnv,
     detached: true,
   });
+  running.child = child;
   child.on("exit", (code) => void shutdown(code ?? 0));
   console.log(`[jigboard] serving http://127.0.0.1:${port}`);
 }

@@ -197,17 +197,16 @@ describe("board order", () => {
 
   it("a move renumbers both columns densely", async () => {
     const w4 = await makeWorld();
-    const a = await makeEpisode(w4.channel.id, "planning", 0, "a");
+    await makeEpisode(w4.channel.id, "planning", 0, "a");
     const b = await makeEpisode(w4.channel.id, "planning", 1, "b");
-    const c = await makeEpisode(w4.channel.id, "planning", 2, "c");
-    const d = await makeEpisode(w4.channel.id, "shooting", 0, "d");
+    await makeEpisode(w4.channel.id, "planning", 2, "c");
+    await makeEpisode(w4.channel.id, "shooting", 0, "d");
     const r = await call(oneRoute.PATCH as never, { method: "PATCH", params: { episodeId: b.id }, body: { stage: "shooting", position: 0 }, user: w4.members.producer });
     expect(r.status).toBe(200);
     const rows = await db().select().from(episodes).where(eq(episodes.channelId, w4.channel.id)).orderBy(asc(episodes.stage), asc(episodes.position));
     const col = (s: string) => rows.filter((x) => x.stage === s).map((x) => [x.title, x.position]);
     expect(col("planning")).toEqual([["a", 0], ["c", 1]]);
     expect(col("shooting")).toEqual([["b", 0], ["d", 1]]);
-    void a, c, d;
   });
 
   it("concurrent moves keep every column dense and unique", async () => {
