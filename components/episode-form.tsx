@@ -17,6 +17,18 @@ function minutesToSeconds(v: unknown): number | null {
   return Number(m[1]) * 60 + (m[2] ? Number(m[2]) : 0);
 }
 
+/** What the inputs hold. */
+interface Fields {
+  title: string;
+  summary: string;
+  targetText: string;
+  publishDate: string;
+  frameRate: FrameRateId;
+  dropFrame: boolean;
+  stage?: (typeof STAGES)[number];
+}
+
+/** What the server receives: the zod schema's output. */
 interface Values {
   title: string;
   summary: string;
@@ -43,14 +55,26 @@ export function EpisodeForm({
   const [serverError, setServerError] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
   const schema = mode === "create" ? episodeCreateSchema : episodeUpdateSchema;
-  const { register, handleSubmit, formState, watch, setError, reset } = useForm<Values, unknown, Values>({
-    // The same zod schema the route handler parses with.
-    resolver: zodResolver(schema as never) as unknown as Resolver<Values>,
+  // The same zod schema the route handler parses with, after mapping input text to its types.
+  const zod = zodResolver(schema as never) as unknown as Resolver<Values, unknown, Values>;
+  const resolver: Resolver<Fields, unknown, Values> = async (fields, ctx, opts) => {
+    const { targetText, ...rest } = fields;
+    const mapped: Values = { ...rest, targetRuntimeSeconds: minutesToSeconds(targetText), publishDate: fields.publishDate || null };
+    const r = await zod(mapped, ctx, opts as never);
+    const errors = { ...r.errors } as Record<string, unknown>;
+    if (errors.targetRuntimeSeconds) {
+      errors.targetText = { type: "validate", message: "Enter minutes, e.g. 14 or 14:30 (at least 10 seconds, at most 6 hours)" };
+      delete errors.targetRuntimeSeconds;
+    }
+    return Object.keys(errors).length ? { values: {}, errors: errors as never } : { values: r.values as Values, errors: {} };
+  };
+  const { register, handleSubmit, formState, watch, setError, reset } = useForm<Fields, unknown, Values>({
+    resolver,
     defaultValues: {
       title: initial?.title ?? "",
       summary: initial?.summary ?? "",
-      targetRuntimeSeconds: initial?.targetRuntimeSeconds ?? null,
-      publishDate: initial?.publishDate ?? null,
+      targetText: secondsToMinutesText(initial?.targetRuntimeSeconds ?? null),
+      publishDate: initial?.publishDate ?? "",
       frameRate: initial?.frameRate ?? "29.97",
       dropFrame: initial?.dropFrame ?? (mode === "create"),
       ...(mode === "create" ? { stage: "idea" as const } : {}),
@@ -65,7 +89,8 @@ export function EpisodeForm({
     const r = await onSubmit(values);
     if (!r.ok) {
       for (const [field, msgs] of Object.entries(r.fields ?? {})) {
-        if (field in values) setError(field as keyof Values, { message: msgs[0] });
+        const name = (field === "targetRuntimeSeconds" ? "targetText" : field) as keyof Fields;
+        if (["title", "summary", "targetText", "publishDate", "frameRate", "dropFrame", "stage"].includes(name)) setError(name, { message: msgs[0] });
       }
       setServerError(r.message);
       return;
@@ -98,14 +123,13 @@ export function EpisodeForm({
         label="Target runtime (minutes or m:ss)"
         inputMode="numeric"
         placeholder="14:30"
-        defaultValue={secondsToMinutesText(initial?.targetRuntimeSeconds ?? null)}
-        {...register("targetRuntimeSeconds", { setValueAs: minutesToSeconds })}
-        error={e.targetRuntimeSeconds ? "Enter minutes, e.g. 14 or 14:30 (at least 10 seconds, at most 6 hours)" : undefined}
+        {...register("targetText")}
+        error={e.targetText?.message}
       />
       <TextField
         label="Planned publish date"
         type="date"
-        {...register("publishDate", { setValueAs: (v: string) => (v ? v : null) })}
+        {...register("publishDate")}
         error={e.publishDate?.message}
       />
       <SelectField label="Frame rate (fps)" {...register("frameRate")} error={e.frameRate?.message}>
@@ -116,7 +140,7 @@ export function EpisodeForm({
         ))}
       </SelectField>
       <div className="flex items-end gap-2 pb-2">
-        <input id="episode-drop-frame" type="checkbox" {...register("dropFrame")} />
+        <input id="episode-drop-frame" type="checkbox" className="accent-chalk-600" {...register("dropFrame")} />
         <label htmlFor="episode-drop-frame" className="text-sm">
           Drop-frame timecode {allowsDropFrame(rate) ? "" : "(only at 29.97 and 59.94)"}
         </label>

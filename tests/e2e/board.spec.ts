@@ -36,6 +36,22 @@ test("presenter creates an episode, moves it by keyboard and by menu, and it per
   await page.reload();
   await expect(board.column("Editing").getByTestId("episode-card").filter({ hasText: title })).toBeVisible();
   await shot(page, "board-presenter");
+
+  // Edit through the same form and schema; the stored runtime comes back as minutes.
+  await board.card(title).getByRole("link", { name: title }).click();
+  const edit = page.getByRole("form", { name: "Edit episode" });
+  await expect(edit.getByLabel("Target runtime (minutes or m:ss)")).toHaveValue("12:30");
+  await edit.getByLabel("Target runtime (minutes or m:ss)").fill("0:05");
+  await edit.getByRole("button", { name: "Save changes" }).click();
+  await expect(edit.getByText("at least 10 seconds")).toBeVisible();
+  await edit.getByLabel("Target runtime (minutes or m:ss)").fill("14");
+  await edit.getByLabel("Title").fill(`${title} (oak)`);
+  await edit.getByRole("button", { name: "Save changes" }).click();
+  await expect(edit.getByText("Saved.")).toBeVisible();
+  await page.reload();
+  await expect(page.getByRole("heading", { name: `${title} (oak)` })).toBeVisible();
+  await expect(page.getByRole("form", { name: "Edit episode" }).getByLabel("Target runtime (minutes or m:ss)")).toHaveValue("14");
+  await shot(page, "episode-edit");
 });
 
 test("sponsor liaison reads the board but moving is refused", async ({ page }) => {
