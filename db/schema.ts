@@ -152,7 +152,8 @@ export const tools = pgTable(
     id: id(),
     channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
     name: text("name").notNull(),
-    kind: text("kind").notNull().default(""),
+    /** hand_tool | power_tool | finish | heat | clamp | measuring | other */
+    kind: text("kind").notNull().default("other"),
     /** bought | gifted | loaned | paid_placement */
     acquisition: text("acquisition").notNull().default("bought"),
     sponsorId: uuid("sponsor_id").references(() => sponsors.id, { onDelete: "set null" }),
@@ -177,6 +178,8 @@ export const buildSteps = pgTable(
     waitReason: text("wait_reason").notNull().default(""),
     crewNeeded: integer("crew_needed").notNull().default(1),
     coverageKinds: text("coverage_kinds").array().notNull().default(sql`'{}'::text[]`),
+    /** Hazards flagged on the step itself (power_tool, finish, fire); tools add their own. */
+    hazards: text("hazards").array().notNull().default(sql`'{}'::text[]`),
     /** planned | in_progress | done | failed | skipped */
     status: text("status").notNull().default("planned"),
     failureNote: text("failure_note"),
@@ -562,6 +565,8 @@ export type Invitation = typeof invitations.$inferSelect;
 export type Episode = typeof episodes.$inferSelect;
 export type NewEpisode = typeof episodes.$inferInsert;
 export type BuildStep = typeof buildSteps.$inferSelect;
+export type Tool = typeof tools.$inferSelect;
+export type MaterialRow = typeof materials.$inferSelect;
 export type ScriptSegment = typeof scriptSegments.$inferSelect;
 export type Shot = typeof shots.$inferSelect;
 export type Clip = typeof clips.$inferSelect;

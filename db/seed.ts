@@ -57,10 +57,11 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<boole
     await tx.insert(schema.memberships).values({ channelId: outsiderChannel.id, userId: outsider!.id, roles: ["owner"] });
 
     const positions: Partial<Record<Stage, number>> = {};
+    const episodeIds: Record<string, string> = {};
     for (const e of EPISODES) {
       const position = positions[e.stage] ?? 0;
       positions[e.stage] = position + 1;
-      await tx.insert(schema.episodes).values({
+      const [ep] = await tx.insert(schema.episodes).values({
         channelId: channel.id,
         title: e.title,
         summary: e.summary,
@@ -72,8 +73,10 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<boole
         dropFrame: true,
         createdBy: ids["presenter@jigboard.example"],
         updatedBy: ids["presenter@jigboard.example"],
-      });
+      }).returning();
+      episodeIds[e.title] = ep!.id;
     }
+    await seedBuildPlans(tx, channel.id, episodeIds);
     await tx.insert(schema.episodes).values({
       channelId: outsiderChannel.id,
       title: "Hall bench in steamed beech",
@@ -86,4 +89,179 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<boole
     });
   });
   return true;
+}
+
+type SeedTx = Parameters<Parameters<NodePgDatabase<typeof schema>["transaction"]>[0]>[0];
+
+interface SeedStep {
+  key: string;
+  title: string;
+  active: number;
+  wait?: number;
+  reason?: string;
+  deps?: string[];
+  tools?: string[];
+  cover?: string[];
+  hazards?: string[];
+  status?: string;
+  failure?: string;
+  remedyOf?: string;
+  notes?: string;
+  crew?: number;
+}
+
+interface SeedPart {
+  part: string;
+  material: string;
+  t: string;
+  w: string;
+  l: string;
+  qty: number;
+  sizing?: "nominal" | "actual";
+  pricing?: string;
+  price: number;
+  waste?: number;
+  step?: string;
+}
+
+/** Invented build plans: a glue-up wait, a finish that needs days, a failure with remedies, a sponsored tool. */
+async function seedBuildPlans(tx: SeedTx, channelId: string, episodeIds: Record<string, string>) {
+  const [sponsor] = await tx
+    .insert(schema.sponsors)
+    .values({ channelId, name: "Brindle Clamp Company", contactName: "Odile Marchetti", contactEmail: "odile@brindle-clamps.example" })
+    .returning();
+  const toolRows = [
+    { key: "tablesaw", name: "Cabinet table saw", kind: "power_tool", acquisition: "bought", caution: "Riving knife on for every rip; push sticks within reach." },
+    { key: "planer", name: "Thickness planer", kind: "power_tool", acquisition: "bought", caution: "Feed no pieces shorter than 12 in; dust collection on." },
+    { key: "router", name: "Plunge router", kind: "power_tool", acquisition: "bought", caution: "" },
+    { key: "clamps", name: "Parallel clamps (set of 8)", kind: "clamp", acquisition: "loaned", sponsorId: sponsor!.id, caution: "" },
+    { key: "chisels", name: "Bench chisels", kind: "hand_tool", acquisition: "bought", caution: "" },
+    { key: "oil", name: "Hardwax oil", kind: "finish", acquisition: "bought", caution: "Oily rags: dry flat outdoors or drown in a closed metal can." },
+    { key: "torch", name: "Propane torch", kind: "heat", acquisition: "bought", caution: "" },
+  ] as const;
+  const tools: Record<string, string> = {};
+  for (const t of toolRows) {
+    const { key, ...values } = t;
+    const [row] = await tx.insert(schema.tools).values({ channelId, ...values }).returning();
+    tools[key] = row!.id;
+  }
+
+  const plan = async (title: string, steps: SeedStep[], parts: SeedPart[]) => {
+    const episodeId = episodeIds[title];
+    if (!episodeId) throw new Error(`seed: no episode ${title}`);
+    const stepIds: Record<string, string> = {};
+    for (const [position, s] of steps.entries()) {
+      const [row] = await tx
+        .insert(schema.buildSteps)
+        .values({
+          episodeId,
+          position,
+          title: s.title,
+          notes: s.notes ?? "",
+          activeMinutes: s.active,
+          waitMinutes: s.wait ?? 0,
+          waitReason: s.reason ?? "",
+          crewNeeded: s.crew ?? 1,
+          coverageKinds: s.cover ?? ["to_camera", "broll"],
+          hazards: s.hazards ?? [],
+          status: s.status ?? "planned",
+          failureNote: s.failure ?? null,
+          remedyOfStepId: s.remedyOf ? stepIds[s.remedyOf] : null,
+        })
+        .returning();
+      stepIds[s.key] = row!.id;
+      for (const d of s.deps ?? []) await tx.insert(schema.stepDependencies).values({ stepId: row!.id, dependsOnStepId: stepIds[d]! });
+      for (const t of s.tools ?? []) await tx.insert(schema.stepTools).values({ stepId: row!.id, toolId: tools[t]! });
+    }
+    for (const [position, p] of parts.entries()) {
+      const num = (v: string) => {
+        const m = /^(\d+)-(\d+)\/(\d+)$/.exec(v) ?? /^()(\d+)\/(\d+)$/.exec(v);
+        return m ? String(Number(m[1] || 0) + Number(m[2]) / Number(m[3])) : v;
+      };
+      await tx.insert(schema.materials).values({
+        episodeId,
+        position,
+        partName: p.part,
+        material: p.material,
+        thickness: num(p.t),
+        width: num(p.w),
+        length: num(p.l),
+        quantity: p.qty,
+        sizing: p.sizing ?? "actual",
+        pricingUnit: p.pricing ?? "board_foot",
+        unitPriceMinor: p.price,
+        wastePercent: String(p.waste ?? 15),
+        stepId: p.step ? stepIds[p.step] : null,
+      });
+    }
+  };
+
+  await plan(
+    "Walnut side table with a floating top",
+    [
+      { key: "acclimate", title: "Sticker the walnut in the shop", active: 20, wait: 3 * 1440, reason: "acclimatise to shop humidity", cover: ["broll"] },
+      { key: "mill", title: "Mill legs, aprons and top to size", active: 150, deps: ["acclimate"], tools: ["tablesaw", "planer"], cover: ["to_camera", "broll", "slow_motion"] },
+      { key: "bridles", title: "Cut the bridle joints", active: 180, deps: ["mill"], tools: ["tablesaw", "chisels"], cover: ["close_up", "overhead"] },
+      { key: "glue", title: "Glue up the base", active: 40, wait: 24 * 60, reason: "glue cure before unclamping", deps: ["bridles"], tools: ["clamps"], crew: 2, cover: ["time_lapse", "broll"] },
+      { key: "top", title: "Flatten and edge the top", active: 90, deps: ["mill"], tools: ["router"], cover: ["broll", "overhead"] },
+      { key: "fit", title: "Fit the top on cleats with a shadow gap", active: 75, deps: ["glue", "top"], cover: ["to_camera", "close_up"] },
+      { key: "oil", title: "Three coats of hardwax oil", active: 45, wait: 3 * 1440, reason: "finish dries between and after coats", deps: ["fit"], tools: ["oil"], hazards: ["finish"], cover: ["time_lapse", "close_up"] },
+    ],
+    [
+      { part: "Leg", material: "Black walnut", t: "1-3/4", w: "1-3/4", l: "24", qty: 4, price: 1450, waste: 20, step: "mill" },
+      { part: "Apron", material: "Black walnut", t: "3/4", w: "3", l: "16", qty: 4, price: 1450, waste: 20, step: "mill" },
+      { part: "Top", material: "Black walnut", t: "3/4", w: "16", l: "20", qty: 1, price: 1450, waste: 25, step: "top" },
+      { part: "Top cleat", material: "Hard maple", t: "3/4", w: "1", l: "14", qty: 2, price: 780, step: "fit" },
+    ],
+  );
+
+  await plan(
+    "Outdoor bench from reclaimed decking",
+    [
+      { key: "strip", title: "Pull screws and plane the old decking", active: 120, tools: ["planer"], status: "done", cover: ["broll", "slow_motion"] },
+      { key: "seat", title: "Glue up the seat slats", active: 60, wait: 24 * 60, reason: "glue cure", deps: ["strip"], tools: ["clamps"], crew: 2, status: "failed", failure: "The seat panel cupped about 1/8 in overnight: the decking was still wet inside.", cover: ["time_lapse"] },
+      { key: "rejoin", title: "Rip the panel apart, dry the stock, re-joint and re-glue", active: 90, wait: 2 * 1440, reason: "drying, then glue cure", deps: ["seat"], remedyOf: "seat", tools: ["tablesaw", "clamps"], cover: ["to_camera", "broll"] },
+      { key: "battens", title: "Screw battens under the seat to hold it flat", active: 40, deps: ["rejoin"], remedyOf: "seat", cover: ["close_up"] },
+      { key: "legs", title: "Cut and join the leg frames", active: 150, deps: ["strip"], tools: ["tablesaw"], status: "done" },
+      { key: "assemble", title: "Assemble and seal the end grain", active: 60, wait: 12 * 60, reason: "sealer dries", deps: ["battens", "legs"], hazards: ["finish"] },
+    ],
+    [
+      { part: "Seat slat", material: "Reclaimed decking 2x6", t: "2", w: "6", l: "48", qty: 6, sizing: "nominal", pricing: "linear_foot", price: 0, waste: 10, step: "seat" },
+      { part: "Leg", material: "Reclaimed decking 2x6", t: "2", w: "6", l: "17", qty: 4, sizing: "nominal", pricing: "linear_foot", price: 0, step: "legs" },
+      { part: "Batten", material: "Pressure-treated 2x4", t: "2", w: "4", l: "16", qty: 3, sizing: "nominal", pricing: "linear_foot", price: 125, step: "battens" },
+      { part: "Exterior screws", material: "Hardware", t: "1/4", w: "1/4", l: "3", qty: 40, pricing: "each", price: 12, waste: 10 },
+    ],
+  );
+
+  await plan(
+    "Crosscut sled with a stop block",
+    [
+      { key: "base", title: "Cut the base and runners", active: 60, tools: ["tablesaw"], cover: ["to_camera", "broll"] },
+      { key: "fences", title: "Laminate the front and back fences", active: 30, wait: 2 * 60, reason: "glue cure before cutting", deps: ["base"], tools: ["clamps"], cover: ["broll", "close_up"] },
+      { key: "square", title: "Square the fence with the five-cut method", active: 45, deps: ["fences"], tools: ["tablesaw"], cover: ["to_camera", "overhead", "close_up"] },
+      { key: "stop", title: "Make and fit the stop block", active: 40, deps: ["square"], tools: ["router"], cover: ["close_up"] },
+    ],
+    [
+      { part: "Base", material: "Baltic birch plywood 3/4", t: "3/4", w: "24", l: "30", qty: 1, pricing: "sheet", price: 8900, waste: 10, step: "base" },
+      { part: "Fence layers", material: "Baltic birch plywood 3/4", t: "3/4", w: "4", l: "30", qty: 4, pricing: "sheet", price: 8900, waste: 10, step: "fences" },
+      { part: "Runner", material: "Hard maple", t: "3/8", w: "3/4", l: "24", qty: 2, price: 780, step: "base" },
+    ],
+  );
+
+  await plan(
+    "End-grain cutting board from maple offcuts",
+    [
+      { key: "strips", title: "Rip maple and cherry strips", active: 60, tools: ["tablesaw"], status: "done" },
+      { key: "glue1", title: "First glue-up: long-grain panel", active: 30, wait: 24 * 60, reason: "glue cure", deps: ["strips"], tools: ["clamps"], status: "done", crew: 2 },
+      { key: "crosscut", title: "Crosscut the panel into end-grain strips", active: 40, deps: ["glue1"], tools: ["tablesaw"], status: "done" },
+      { key: "glue2", title: "Second glue-up: end-grain board", active: 30, wait: 24 * 60, reason: "glue cure", deps: ["crosscut"], tools: ["clamps"], status: "done", crew: 2 },
+      { key: "flatten", title: "Flatten with the router sled", active: 90, deps: ["glue2"], tools: ["router"], status: "done" },
+      { key: "brand", title: "Burn the channel mark into the side", active: 10, deps: ["flatten"], tools: ["torch"], status: "done", cover: ["close_up", "slow_motion"] },
+      { key: "oil", title: "Food-safe oil, two coats", active: 20, wait: 2 * 1440, reason: "oil cures", deps: ["brand"], tools: ["oil"], status: "done" },
+    ],
+    [
+      { part: "Strips", material: "Hard maple", t: "1-1/2", w: "2", l: "36", qty: 6, price: 780, step: "strips" },
+      { part: "Accent strips", material: "Cherry", t: "1-1/2", w: "1", l: "36", qty: 2, price: 990, step: "strips" },
+    ],
+  );
 }

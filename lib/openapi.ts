@@ -8,8 +8,10 @@ import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
 import { invitationAcceptSchema, invitationCreateSchema, memberRolesSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
+import { materialCreateSchema, materialUpdateSchema, photoUploadSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolUpdateSchema, STEP_STATUSES } from "./schemas/build";
+import { HAZARDS } from "./safety";
 
-type Method = "get" | "post" | "patch" | "delete";
+type Method = "get" | "post" | "patch" | "put" | "delete";
 interface RouteDoc {
   method: Method;
   path: string;
@@ -17,6 +19,8 @@ interface RouteDoc {
   auth?: boolean;
   body?: z.ZodType;
   query?: z.ZodObject;
+  /** The body is raw text of this media type instead of JSON. */
+  textBody?: string;
   response: z.ZodType;
   status?: number;
   errors: number[];
@@ -26,6 +30,64 @@ const channelSchema = z.object({ id: z.string(), name: z.string(), roles: z.arra
 const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), joinedAt: z.string() });
 const invitationSchema = z.object({ id: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), expiresAt: z.string() });
 const mailSchema = z.object({ id: z.string(), fromAddress: z.string(), toAddresses: z.array(z.string()), subject: z.string(), textBody: z.string(), receivedAt: z.string() });
+
+const timingSchema = z.object({ start: z.number(), activeEnd: z.number(), end: z.number() });
+const toolSchema = z
+  .object({ id: z.string(), name: z.string(), kind: z.string(), acquisition: z.string(), sponsorId: z.string().nullable(), sponsored: z.boolean(), caution: z.string(), photoKey: z.string().nullable() })
+  .meta({ id: "Tool" });
+const planSchema = z
+  .object({
+    steps: z.array(
+      z.object({
+        id: z.string(),
+        position: z.number(),
+        title: z.string(),
+        notes: z.string(),
+        activeMinutes: z.number(),
+        waitMinutes: z.number(),
+        waitReason: z.string(),
+        crewNeeded: z.number(),
+        coverageKinds: z.array(z.string()),
+        hazards: z.array(z.string()),
+        cautions: z.array(z.enum(HAZARDS)),
+        dependsOn: z.array(z.string()),
+        toolIds: z.array(z.string()),
+        status: z.enum(STEP_STATUSES),
+        failureNote: z.string().nullable(),
+        failurePhotoUrl: z.string().nullable(),
+        remedyOfStepId: z.string().nullable(),
+        timing: timingSchema,
+      }),
+    ),
+    timing: z.object({ totalActiveMinutes: z.number(), totalWaitMinutes: z.number(), criticalPathMinutes: z.number(), criticalPath: z.array(z.string()) }),
+    toolsUsed: z.array(toolSchema.extend({ steps: z.array(z.string()) })),
+  })
+  .meta({ id: "BuildPlan" });
+const figuresSchema = z.object({ boardFeet: z.number(), cubicMetres: z.number(), sheets: z.number(), linearFeet: z.number(), costMinor: z.number() });
+const materialSchema = z
+  .object({
+    id: z.string(),
+    partName: z.string(),
+    material: z.string(),
+    unit: z.enum(["in", "mm"]),
+    thickness: z.number(),
+    width: z.number(),
+    length: z.number(),
+    quantity: z.number(),
+    sizing: z.enum(["nominal", "actual"]),
+    pricingUnit: z.string(),
+    unitPriceMinor: z.number(),
+    currency: z.string(),
+    wastePercent: z.number(),
+    stepId: z.string().nullable(),
+    supplierNote: z.string(),
+    figures: figuresSchema,
+  })
+  .meta({ id: "MaterialRow" });
+const materialTotalSchema = z.object({ material: z.string(), boardFeet: z.number(), cubicMetres: z.number(), sheetsToBuy: z.number(), costMinor: z.number(), rows: z.number() });
+const cutListSchema = z
+  .object({ rows: z.array(materialSchema), totals: z.object({ byMaterial: z.array(materialTotalSchema), total: materialTotalSchema.omit({ material: true }) }) })
+  .meta({ id: "CutList" });
 
 export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/health", summary: "Database and storage status", auth: false, response: z.object({ ok: z.boolean(), database: z.object({ ok: z.boolean() }), storage: z.object({ ok: z.boolean() }) }), errors: [503] },
@@ -44,6 +106,24 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/password-reset", summary: "Send a password-reset link (same answer whether or not the account exists)", auth: false, body: resetRequestSchema, response: okSchema, status: 202, errors: [400] },
   { method: "post", path: "/api/password-reset/confirm", summary: "Set a new password with a reset token", auth: false, body: resetConfirmSchema, response: okSchema, errors: [400, 404] },
   { method: "get", path: "/api/mailbox", summary: "Dev mailbox: messages the local SMTP fake received (owner; dev only)", query: z.object({ channelId: z.string() }), response: z.object({ messages: z.array(mailSchema) }), errors: [400, 401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/steps", summary: "The build plan: steps, links, cautions, timing and critical path, tools used", response: planSchema, errors: [401, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/steps", summary: "Add a build step at the end of the plan (presenter, owner)", body: stepCreateSchema, response: z.object({ step: z.object({ id: z.string(), title: z.string(), position: z.number() }) }), status: 201, errors: [400, 401, 403, 404, 409, 422] },
+  { method: "put", path: "/api/episodes/{episodeId}/steps/order", summary: "Set the order of all steps at once", body: stepOrderSchema, response: okSchema, errors: [400, 401, 403, 404, 409] },
+  { method: "patch", path: "/api/steps/{stepId}", summary: "Edit a step; producers may change only active time, wait and crew; dependency loops are refused", body: stepUpdateSchema, response: z.object({ step: z.object({ id: z.string() }) }), errors: [400, 401, 403, 404, 409, 422] },
+  { method: "delete", path: "/api/steps/{stepId}", summary: "Delete a step", response: okSchema, errors: [401, 403, 404] },
+  { method: "post", path: "/api/steps/{stepId}/failure", summary: "Mark a step failed with what went wrong and an optional uploaded photo", body: stepFailureSchema, response: z.object({ step: z.object({ id: z.string(), status: z.literal("failed") }) }), errors: [400, 401, 403, 404, 422] },
+  { method: "post", path: "/api/steps/{stepId}/remedies", summary: "Add a remedy step after a failed step", body: stepCreateSchema, response: z.object({ step: z.object({ id: z.string(), title: z.string(), remedyOfStepId: z.string() }) }), status: 201, errors: [400, 401, 403, 404, 409, 422] },
+  { method: "post", path: "/api/episodes/{episodeId}/photos", summary: "Sign a direct upload of one photo to storage", body: photoUploadSchema, response: z.object({ key: z.string(), uploadUrl: z.string(), headers: z.record(z.string(), z.string()) }), status: 201, errors: [400, 401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/materials", summary: "The cut list with board feet, volume, sheets and cost", response: cutListSchema, errors: [401, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/materials", summary: "Add a cut-list row (sizes accept 3/4 and 1-1/2)", body: materialCreateSchema, response: z.object({ material: materialSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "patch", path: "/api/materials/{materialId}", summary: "Edit a cut-list row", body: materialUpdateSchema, response: z.object({ material: materialSchema }), errors: [400, 401, 403, 404, 422] },
+  { method: "delete", path: "/api/materials/{materialId}", summary: "Delete a cut-list row", response: okSchema, errors: [401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/materials/csv", summary: "Export the cut list as CSV (text/csv)", response: z.string(), errors: [401, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/materials/csv", summary: "Import cut-list rows from CSV text; all rows or none, errors by line and field", textBody: "text/csv", response: z.object({ imported: z.number() }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "get", path: "/api/channels/{channelId}/tools", summary: "The channel's tool shelf", response: z.object({ tools: z.array(toolSchema) }), errors: [401, 404] },
+  { method: "post", path: "/api/channels/{channelId}/tools", summary: "Add a tool to the shelf", body: toolCreateSchema, response: z.object({ tool: toolSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "patch", path: "/api/tools/{toolId}", summary: "Edit a tool", body: toolUpdateSchema, response: z.object({ tool: toolSchema }), errors: [400, 401, 403, 404, 422] },
+  { method: "delete", path: "/api/tools/{toolId}", summary: "Take a tool off the shelf (archive)", response: okSchema, errors: [401, 403, 404, 409] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];
@@ -85,6 +165,7 @@ export function openApiDocument() {
       summary: r.summary,
       ...(r.auth === false ? { security: [] } : {}),
       parameters: [...params, ...queryParams],
+      ...(r.textBody ? { requestBody: { required: true, content: { [r.textBody]: { schema: { type: "string" } } } } } : {}),
       ...(r.body ? { requestBody: { required: true, content: { "application/json": { schema: schemaOf(r.body, "input") } } } } : {}),
       responses,
     };

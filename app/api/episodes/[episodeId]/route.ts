@@ -1,20 +1,14 @@
-import { json, parseBody, parseId, route, sessionUser } from "@/lib/server/api";
-import { assertCan, assertCanMove, requireChannel } from "@/lib/server/access";
+import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { assertCan, assertCanMove } from "@/lib/server/access";
+import { loadEpisode } from "@/lib/server/loaders";
 import { AppError } from "@/lib/server/errors";
 import { episodeUpdateSchema } from "@/lib/schemas/episode";
-import { archiveEpisode, getEpisodeById, toEpisodeDto, updateEpisode } from "@/db/queries/episodes";
+import { archiveEpisode, toEpisodeDto, updateEpisode } from "@/db/queries/episodes";
 import { recordAudit } from "@/db/queries/audit";
 
 type P = { episodeId: string };
 
-async function load(userId: string, episodeIdRaw: string) {
-  const id = parseId(episodeIdRaw, "episode");
-  const episode = await getEpisodeById({ id });
-  if (!episode) throw new AppError("not_found:episode", "No such episode.");
-  // Not a member of the episode's channel: the episode does not exist for this user.
-  const access = await requireChannel(userId, episode.channelId, "channel.read", "episode");
-  return { episode, access };
-}
+const load = (userId: string, rawId: string) => loadEpisode(userId, rawId);
 
 export const GET = route<P>(async (req, params) => {
   const user = await sessionUser(req);

@@ -1,0 +1,58 @@
+import { json, route, sessionUser } from "@/lib/server/api";
+import { loadEpisode } from "@/lib/server/loaders";
+import { materialCreateSchema, type MaterialCreate } from "@/lib/schemas/build";
+import { createMaterials, listMaterialsByEpisode, stepIdsOfEpisode, toMaterialInput } from "@/db/queries/materials";
+import { parseCsv, recordToBody, toCsv } from "@/lib/cut-list-csv";
+import { AppError } from "@/lib/server/errors";
+
+type P = { episodeId: string };
+
+const MAX_CSV_BYTES = 2 * 1024 * 1024;
+
+export const GET = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { episode } = await loadEpisode(user.id, params.episodeId);
+  const [rows, steps] = await Promise.all([listMaterialsByEpisode({ episodeId: episode.id }), stepIdsOfEpisode({ episodeId: episode.id })]);
+  const title = new Map(steps.map((s) => [s.id, s.title]));
+  const csv = toCsv(rows.map(toMaterialInput).map((r) => ({ ...r, stepTitle: r.stepId ? (title.get(r.stepId) ?? null) : null })));
+  const name = episode.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "episode";
+  return new Response(csv, { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="cut-list-${name}.csv"` } });
+});
+
+/**
+ * Imports rows from CSV text (the body). Every row is checked with the same
+ * schema as the API; if any row is wrong nothing is imported and each error
+ * names its line and field.
+ */
+export const POST = route<P>(async (req, params) => {
+  const text = await req.text();
+  if (text.length > MAX_CSV_BYTES) throw new AppError("validation:csv", "The file is larger than 2 MB; split it.");
+  const parsed = parseCsv(text);
+  if (!parsed.ok) throw new AppError("validation:csv", parsed.message);
+  if (parsed.records.length === 0) throw new AppError("validation:csv", "The file has a header but no rows.");
+  const user = await sessionUser(req);
+  const { episode } = await loadEpisode(user.id, params.episodeId, "build.edit");
+  const steps = await stepIdsOfEpisode({ episodeId: episode.id });
+  const byTitle = new Map(steps.map((s) => [s.title.toLowerCase(), s.id]));
+  const fields: Record<string, string[]> = {};
+  const rows: MaterialCreate[] = [];
+  for (const rec of parsed.records) {
+    const { body, unknownStep } = recordToBody(rec, byTitle);
+    if (unknownStep) (fields[`line ${rec.line}: step`] ??= []).push(`no build step called “${unknownStep}” in this episode`);
+    const r = materialCreateSchema.safeParse({ ...body, stepId: unknownStep ? null : body.stepId });
+    if (!r.success) {
+      for (const issue of r.error.issues) (fields[`line ${rec.line}: ${csvName(String(issue.path[0] ?? "row"))}`] ??= []).push(issue.message);
+    } else rows.push(r.data);
+  }
+  const problems = Object.keys(fields).length;
+  if (problems) {
+    throw new AppError("unprocessable:csv", `Nothing was imported: ${problems} problem${problems > 1 ? "s" : ""} in the file. Fix them and import again.`, { fields });
+  }
+  const created = await createMaterials({ episodeId: episode.id, rows });
+  return json({ imported: created.length }, 201);
+});
+
+function csvName(field: string): string {
+  const map: Record<string, string> = { partName: "part", pricingUnit: "pricing_unit", unitPriceMinor: "unit_price", wastePercent: "waste_percent", stepId: "step", supplierNote: "supplier_note" };
+  return map[field] ?? field;
+}

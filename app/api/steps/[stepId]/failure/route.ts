@@ -1,0 +1,39 @@
+import { HeadObjectCommand } from "@aws-sdk/client-s3";
+import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { loadStep } from "@/lib/server/loaders";
+import { assertCan } from "@/lib/server/access";
+import { stepFailureSchema } from "@/lib/schemas/build";
+import { updateStep } from "@/db/queries/build";
+import { AppError } from "@/lib/server/errors";
+import { recordAudit } from "@/db/queries/audit";
+import { keyBelongsToChannel } from "@/storage/keys";
+import { bucket, s3 } from "@/storage/s3";
+
+type P = { stepId: string };
+
+/** Marks a step failed with what went wrong (and an optional photo already uploaded). */
+export const POST = route<P>(async (req, params) => {
+  const input = await parseBody(req, stepFailureSchema, "failure");
+  const user = await sessionUser(req);
+  const { step, channelId, access } = await loadStep(user.id, params.stepId);
+  assertCan(access, "build.edit");
+  if (input.photoKey) {
+    const bad = () => new AppError("unprocessable:step.photo", "That photo was not uploaded for this channel. Upload it again.", { fields: { photoKey: ["upload the photo first"] } });
+    if (!keyBelongsToChannel(input.photoKey, channelId) || !input.photoKey.includes("/photo/")) throw bad();
+    await s3()
+      .send(new HeadObjectCommand({ Bucket: bucket(), Key: input.photoKey }))
+      .catch(() => {
+        throw bad();
+      });
+  }
+  const result = await updateStep({
+    stepId: step.id,
+    episodeId: step.episodeId,
+    channelId,
+    patch: { status: "failed", failureNote: input.note, failurePhotoKey: input.photoKey },
+    check: () => {},
+  });
+  if (!result) throw new AppError("not_found:step", "No such build step.");
+  await recordAudit({ channelId, userId: user.id, action: "fail", entity: "build_step", entityId: step.id, after: input });
+  return json({ step: { id: step.id, status: "failed" } });
+});

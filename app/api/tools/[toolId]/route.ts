@@ -1,0 +1,32 @@
+import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { loadTool } from "@/lib/server/loaders";
+import { assertCan } from "@/lib/server/access";
+import { toolUpdateSchema } from "@/lib/schemas/build";
+import { archiveTool, sponsorBelongsToChannel, updateTool } from "@/db/queries/tools";
+import { toolDto } from "@/lib/server/plan";
+import { AppError } from "@/lib/server/errors";
+
+type P = { toolId: string };
+
+export const PATCH = route<P>(async (req, params) => {
+  const patch = await parseBody(req, toolUpdateSchema, "tool");
+  const user = await sessionUser(req);
+  const { tool, access } = await loadTool(user.id, params.toolId);
+  assertCan(access, "tools.edit");
+  if (patch.sponsorId && !(await sponsorBelongsToChannel({ sponsorId: patch.sponsorId, channelId: tool.channelId }))) {
+    throw new AppError("unprocessable:tool.sponsor", "That sponsor is not one of this channel's.", { fields: { sponsorId: ["not a sponsor of this channel"] } });
+  }
+  const row = await updateTool({ id: tool.id, channelId: tool.channelId, patch });
+  if (!row) throw new AppError("not_found:tool", "No such tool.");
+  return json({ tool: toolDto(row) });
+});
+
+/** Removing a tool archives it; steps that used it keep the link for the record. */
+export const DELETE = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { tool, access } = await loadTool(user.id, params.toolId);
+  assertCan(access, "tools.edit");
+  const row = await archiveTool({ id: tool.id, channelId: tool.channelId });
+  if (!row) throw new AppError("conflict:tool.archived", "This tool is already off the shelf.");
+  return json({ ok: true });
+});

@@ -1,0 +1,50 @@
+import type { Hazard } from "@/lib/safety";
+import type { StepStatus } from "@/lib/schemas/build";
+
+export interface PlanStepDto {
+  id: string;
+  position: number;
+  title: string;
+  notes: string;
+  activeMinutes: number;
+  waitMinutes: number;
+  waitReason: string;
+  crewNeeded: number;
+  coverageKinds: string[];
+  hazards: string[];
+  cautions: Hazard[];
+  dependsOn: string[];
+  toolIds: string[];
+  status: StepStatus;
+  failureNote: string | null;
+  failurePhotoUrl: string | null;
+  remedyOfStepId: string | null;
+  timing: { start: number; activeEnd: number; end: number };
+}
+
+export interface ToolDto {
+  id: string;
+  name: string;
+  kind: string;
+  acquisition: string;
+  sponsorId: string | null;
+  sponsored: boolean;
+  caution: string;
+}
+
+export interface PlanDto {
+  steps: PlanStepDto[];
+  timing: { totalActiveMinutes: number; totalWaitMinutes: number; criticalPathMinutes: number; criticalPath: string[] };
+  toolsUsed: (ToolDto & { steps: string[] })[];
+}
+
+export async function api<T>(url: string, init?: RequestInit & { json?: unknown }): Promise<T> {
+  const res = await fetch(url, {
+    ...init,
+    headers: { "content-type": "application/json", ...(init?.headers ?? {}) },
+    body: init?.json !== undefined ? JSON.stringify(init.json) : init?.body,
+  });
+  const data = await res.json().catch(() => ({}));
+  if (!res.ok) throw Object.assign(new Error(data?.error?.message ?? `Request failed (${res.status})`), { status: res.status, fields: data?.error?.fields as Record<string, string[]> | undefined });
+  return data as T;
+}
