@@ -3,6 +3,7 @@ import { and, asc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { buildSteps, episodes, stepDependencies, stepTools, tools, type BuildStep } from "../schema";
 import type { StepCreate, StepUpdate } from "../../lib/schemas/build";
+import { findCycle } from "../../lib/build-plan";
 
 export interface StepWithLinks extends BuildStep {
   dependsOn: string[];
@@ -102,6 +103,15 @@ export async function createStep({
     const deps = remedyOf && !dependsOn.includes(remedyOf) ? [remedyOf, ...dependsOn] : dependsOn;
     await writeLinks(tx, row!.id, deps, toolIds);
     if (remedyOf) {
+      // What waited for the failed step now waits for its remedy too, so the schedule follows the fix.
+      let graph = [...ctx.steps.map((s) => ({ id: s.id, dependsOn: s.dependsOn })), { id: row!.id, dependsOn: deps }];
+      for (const s of ctx.steps) {
+        if (s.id === remedyOf || s.remedyOfStepId === remedyOf || !s.dependsOn.includes(remedyOf)) continue;
+        const next = graph.map((g) => (g.id === s.id ? { ...g, dependsOn: [...g.dependsOn, row!.id] } : g));
+        if (findCycle(next)) continue;
+        graph = next;
+        await tx.insert(stepDependencies).values({ stepId: s.id, dependsOnStepId: row!.id });
+      }
       const order = ctx.steps.map((s) => s.id);
       let at = order.indexOf(remedyOf) + 1;
       while (at < order.length && ctx.steps[at]!.remedyOfStepId === remedyOf) at++;
