@@ -1,0 +1,97 @@
+/**
+ * Script timing: every segment's start, end and duration in integer frames at
+ * the episode's rate. Spoken segments take their words at the presenter's
+ * reading rate (default 150 wpm, common practice) plus pause markers; on-screen
+ * text takes its characters at caption reading speed (17 characters a
+ * second); an explicit duration overrides both. A pinned start fixes where a
+ * segment begins, and the engine reports the drift between the running
+ * estimate and the pin instead of hiding it.
+ */
+import { msToFrames, type Rate } from "./timecode";
+import { pausesMs, readableChars, spokenWordCount } from "./spoken-words";
+
+export const SEGMENT_KINDS = ["to_camera", "voice_over", "sponsor_read", "on_screen_text"] as const;
+export type SegmentKind = (typeof SEGMENT_KINDS)[number];
+export const SEGMENT_KIND_LABELS: Record<SegmentKind, string> = {
+  to_camera: "To camera",
+  voice_over: "Voice-over",
+  sponsor_read: "Sponsor read",
+  on_screen_text: "On-screen text",
+};
+
+export const DEFAULT_WPM = 150;
+export const MIN_WPM = 100;
+export const MAX_WPM = 220;
+/** Caption reading speed for adults, 17 characters a second (lower end of broadcaster guidance). */
+export const CAPTION_CPS = 17;
+/** Shortest time a line of on-screen text stays up (common practice, no published source). */
+export const MIN_ON_SCREEN_MS = 1500;
+
+export interface TimingSegment {
+  id: string;
+  kind: SegmentKind;
+  text: string;
+  stepId?: string | null;
+  pinnedStartFrame?: number | null;
+  explicitDurationFrames?: number | null;
+}
+
+export interface TimedSegment {
+  id: string;
+  kind: SegmentKind;
+  stepId: string | null;
+  words: number;
+  start: number;
+  end: number;
+  duration: number;
+  /** Where the running estimate would have started it (before any pin). */
+  estimatedStart: number;
+  /** estimatedStart − pinned start: positive means the script before it runs long. */
+  drift: number | null;
+  source: "explicit" | "reading" | "caption";
+}
+
+export interface ScriptTiming {
+  segments: TimedSegment[];
+  totalFrames: number;
+  byKind: Record<SegmentKind, number>;
+  byStep: Record<string, number>;
+  targetFrames: number | null;
+  /** totalFrames − targetFrames: positive is over. */
+  overFrames: number | null;
+}
+
+export function segmentDurationFrames(s: TimingSegment, rate: Rate, wpm = DEFAULT_WPM): { frames: number; words: number; source: TimedSegment["source"] } {
+  const words = s.kind === "on_screen_text" ? 0 : spokenWordCount(s.text);
+  if (s.explicitDurationFrames != null) return { frames: s.explicitDurationFrames, words, source: "explicit" };
+  if (s.kind === "on_screen_text") {
+    const chars = readableChars(s.text);
+    const ms = chars ? Math.max(MIN_ON_SCREEN_MS, (chars * 1000) / CAPTION_CPS) : 0;
+    return { frames: msToFrames(ms + pausesMs(s.text), rate), words, source: "caption" };
+  }
+  // words / wpm minutes, in whole milliseconds, then to frames; integers all the way.
+  const readingMs = Math.round((words * 60_000) / wpm);
+  return { frames: msToFrames(readingMs + pausesMs(s.text), rate), words, source: "reading" };
+}
+
+export function timeScript(segments: TimingSegment[], rate: Rate, opts: { wpm?: number; targetSeconds?: number | null } = {}): ScriptTiming {
+  const wpm = opts.wpm ?? DEFAULT_WPM;
+  const out: TimedSegment[] = [];
+  const byKind = { to_camera: 0, voice_over: 0, sponsor_read: 0, on_screen_text: 0 } as Record<SegmentKind, number>;
+  const byStep: Record<string, number> = {};
+  let cursor = 0;
+  for (const s of segments) {
+    const { frames, words, source } = segmentDurationFrames(s, rate, wpm);
+    const estimatedStart = cursor;
+    const start = s.pinnedStartFrame ?? cursor;
+    const drift = s.pinnedStartFrame != null ? estimatedStart - s.pinnedStartFrame : null;
+    const end = start + frames;
+    out.push({ id: s.id, kind: s.kind, stepId: s.stepId ?? null, words, start, end, duration: frames, estimatedStart, drift, source });
+    byKind[s.kind] += frames;
+    if (s.stepId) byStep[s.stepId] = (byStep[s.stepId] ?? 0) + frames;
+    cursor = end;
+  }
+  const totalFrames = out.length ? Math.max(...out.map((s) => s.end)) : 0;
+  const targetFrames = opts.targetSeconds != null ? msToFrames(opts.targetSeconds * 1000, rate) : null;
+  return { segments: out, totalFrames, byKind, byStep, targetFrames, overFrames: targetFrames != null ? totalFrames - targetFrames : null };
+}
