@@ -8,11 +8,12 @@ export function EpisodeNav({ base }: { base: string }) {
     { href: base, label: "Overview" },
     { href: `${base}/plan`, label: "Build plan" },
     { href: `${base}/cut-list`, label: "Cut list" },
+    { href: `${base}/script`, label: "Script" },
   ];
   return (
     <nav aria-label="Episode" className="flex gap-1 border-b border-timber-300">
       {items.map((i) => {
-        const current = path === i.href;
+        const current = i.href === base ? path === base : path.startsWith(i.href);
         return (
           <Link
             key={i.href}

@@ -131,6 +131,8 @@ export const episodes = pgTable(
     publishDate: date("publish_date"),
     frameRate: text("frame_rate").$type<FrameRateId>().notNull().default("29.97"),
     dropFrame: boolean("drop_frame").notNull().default(false),
+    /** Whose reading rate times the script. */
+    presenterId: uuid("presenter_id").references(() => users.id, { onDelete: "set null" }),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     updatedBy: uuid("updated_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),

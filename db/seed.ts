@@ -76,7 +76,8 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<boole
       }).returning();
       episodeIds[e.title] = ep!.id;
     }
-    await seedBuildPlans(tx, channel.id, episodeIds);
+    const stepIds = await seedBuildPlans(tx, channel.id, episodeIds);
+    await seedScripts(tx, episodeIds, stepIds, ids["presenter@jigboard.example"]!);
     await tx.insert(schema.episodes).values({
       channelId: outsiderChannel.id,
       title: "Hall bench in steamed beech",
@@ -125,7 +126,8 @@ interface SeedPart {
 }
 
 /** Invented build plans: a glue-up wait, a finish that needs days, a failure with remedies, a sponsored tool. */
-async function seedBuildPlans(tx: SeedTx, channelId: string, episodeIds: Record<string, string>) {
+async function seedBuildPlans(tx: SeedTx, channelId: string, episodeIds: Record<string, string>): Promise<Record<string, Record<string, string>>> {
+  const allStepIds: Record<string, Record<string, string>> = {};
   const [sponsor] = await tx
     .insert(schema.sponsors)
     .values({ channelId, name: "Brindle Clamp Company", contactName: "Odile Marchetti", contactEmail: "odile@brindle-clamps.example" })
@@ -150,6 +152,7 @@ async function seedBuildPlans(tx: SeedTx, channelId: string, episodeIds: Record<
     const episodeId = episodeIds[title];
     if (!episodeId) throw new Error(`seed: no episode ${title}`);
     const stepIds: Record<string, string> = {};
+    allStepIds[title] = stepIds;
     for (const [position, s] of steps.entries()) {
       const [row] = await tx
         .insert(schema.buildSteps)
@@ -264,4 +267,59 @@ async function seedBuildPlans(tx: SeedTx, channelId: string, episodeIds: Record<
       { part: "Accent strips", material: "Cherry", t: "1-1/2", w: "1", l: "36", qty: 2, price: 990, step: "strips" },
     ],
   );
+  return allStepIds;
+}
+
+type SeedSegment = [kind: string, step: string | null, text: string, extra?: { chapter?: string; pinSeconds?: number; fixedSeconds?: number; note?: string }];
+
+/** Invented scripts in the channel's voice, linked to the build steps above. Frame rate 29.97 DF. */
+async function seedScripts(tx: SeedTx, episodeIds: Record<string, string>, stepIds: Record<string, Record<string, string>>, presenterId: string) {
+  const fps = 30000 / 1001;
+  const script = async (title: string, segments: SeedSegment[]) => {
+    const episodeId = episodeIds[title]!;
+    await tx.update(schema.episodes).set({ presenterId }).where(sql`id = ${episodeId}`);
+    for (const [position, [kind, step, text, extra]] of segments.entries()) {
+      await tx.insert(schema.scriptSegments).values({
+        episodeId,
+        position,
+        kind,
+        text,
+        stepId: step ? stepIds[title]![step]! : null,
+        chapterStart: Boolean(extra?.chapter),
+        chapterTitle: extra?.chapter ?? null,
+        pinnedStartFrame: extra?.pinSeconds != null ? Math.round(extra.pinSeconds * fps) : null,
+        explicitDurationFrames: extra?.fixedSeconds != null ? Math.round(extra.fixedSeconds * fps) : null,
+        editorNotes: extra?.note ?? "",
+        updatedBy: presenterId,
+      });
+    }
+  };
+
+  await script("Outdoor bench from reclaimed decking", [
+    ["to_camera", null, "This decking spent eight summers under a barbecue. Today it becomes a bench, and before the end of the week it tried very hard to become firewood instead. {1s} Let me show you what happened.", { chapter: "A bench from old boards" }],
+    ["on_screen_text", null, "Reclaimed decking, 2x6, about 40 linear feet"],
+    ["voice_over", "strip", "First job: every screw comes out. A metal detector wand finds the ones that snapped off, because one buried screw will take a nick out of the planer knives. Then a light pass on each face until clean wood shows through.", { chapter: "Stripping the old boards", note: "Use the slow-motion shot of the first shavings here." }],
+    ["voice_over", "seat", "The seat is six slats glued edge to edge. Glue on both faces of each joint, clamps alternating above and below so the panel stays flat, and then we wait a full day.", { chapter: "The glue-up that failed" }],
+    ["to_camera", "seat", "Next morning the panel had cupped about an eighth of an inch. The outside of these boards was dry. The inside was not. That water had to go somewhere, and it went into the shape of a shallow bowl."],
+    ["voice_over", "rejoin", "So the panel goes back through the saw, right on the glue lines. The strips sit stickered in front of a fan for two days, and this time I check them with a moisture meter before any glue comes out.", { chapter: "Starting the seat again" }],
+    ["voice_over", "battens", "Two battens underneath, screwed through slotted holes, keep the seat flat while still letting it move with the seasons. {2s}"],
+    ["voice_over", "legs", "The leg frames are simple half-laps cut on the table saw with a dado stack. Riving knife off for the dado, guard back on the moment it's done.", { pinSeconds: 260 }],
+    ["to_camera", "assemble", "End grain gets a sealer so it doesn't drink the rain, and that's the bench. It took two days longer than planned, and I'd call that a cheap lesson.", { chapter: "Finished bench" }],
+  ]);
+
+  await script("Crosscut sled with a stop block", [
+    ["to_camera", null, "A crosscut sled is the first jig I'd build for any table saw. It's square, it's repeatable, and it keeps your hands well away from the blade.", { chapter: "Why a sled" }],
+    ["voice_over", "base", "The base is three-quarter birch ply, twenty-four by thirty. The runners are hard maple, planed until they slide in the miter slots with no play at all.", { chapter: "Base and runners" }],
+    ["sponsor_read", "fences", "The fences are two layers of ply laminated together, and the clamps holding them come from Brindle Clamp Company, who lent them to the channel for this build. That's a sponsorship: they had no say in what I tell you about them. The jaws stay parallel under pressure, so the glue-up stays flat.", { note: "Show the disclosure caption while this plays." }],
+    ["on_screen_text", "fences", "Paid partnership: clamps loaned by Brindle Clamp Company"],
+    ["voice_over", "square", "Squaring uses the five-cut method. Cut each edge of a test board in turn, measure the last offcut at both ends, and the difference tells you how far to nudge the fence.", { chapter: "Five cuts to square" }],
+    ["voice_over", "stop", "Last, a stop block that rides in a T-track, so ten parts come out exactly the same length. {1.5s}", { chapter: "The stop block" }],
+  ]);
+
+  await script("Walnut side table with a floating top", [
+    ["to_camera", null, "Walnut, bridle joints, and a top that seems to hover over the base. This is the plan, and it starts with three days of doing nothing at all.", { chapter: "The plan" }],
+    ["voice_over", "acclimate", "The boards get stickered in the shop so they settle to our humidity before a single cut. Skip this step and the joints you fit on Monday are loose by Friday."],
+    ["voice_over", "bridles", "Each bridle joint starts on the table saw with a tenoning jig and finishes with a chisel, paring to a knife line.", { chapter: "Bridle joints" }],
+    ["voice_over", "oil", "Three coats of hardwax oil, a day between each. The rags go flat on the concrete outside to dry. Oily rags can catch fire all on their own.", { chapter: "Oil finish" }],
+  ]);
 }

@@ -10,6 +10,8 @@ import { invitationAcceptSchema, invitationCreateSchema, memberRolesSchema, rese
 import { ROLES } from "./roles";
 import { materialCreateSchema, materialUpdateSchema, photoUploadSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolUpdateSchema, STEP_STATUSES } from "./schemas/build";
 import { HAZARDS } from "./safety";
+import { exportQuerySchema, readingRateSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSplitSchema, timingQuerySchema } from "./schemas/script";
+import { SEGMENT_KINDS } from "./script-timing";
 
 type Method = "get" | "post" | "patch" | "put" | "delete";
 interface RouteDoc {
@@ -89,6 +91,57 @@ const cutListSchema = z
   .object({ rows: z.array(materialSchema), totals: z.object({ byMaterial: z.array(materialTotalSchema), total: materialTotalSchema.omit({ material: true }) }) })
   .meta({ id: "CutList" });
 
+const segmentSchema = z
+  .object({
+    id: z.string(),
+    position: z.number(),
+    kind: z.enum(SEGMENT_KINDS),
+    text: z.string(),
+    stepId: z.string().nullable(),
+    pinnedStartFrame: z.number().nullable(),
+    explicitDurationFrames: z.number().nullable(),
+    editorNotes: z.string(),
+    chapterStart: z.boolean(),
+    chapterTitle: z.string().nullable(),
+    version: z.number(),
+    updatedBy: z.string().nullable(),
+    updatedAt: z.string(),
+  })
+  .meta({ id: "Segment" });
+const segmentTimingSchema = z.object({
+  start: z.number(),
+  end: z.number(),
+  duration: z.number(),
+  estimatedStart: z.number(),
+  drift: z.number().nullable(),
+  words: z.number(),
+  source: z.enum(["explicit", "reading", "caption"]),
+  startTimecode: z.string(),
+  endTimecode: z.string(),
+  durationSeconds: z.number(),
+});
+const chaptersSchema = z.object({
+  chapters: z.array(z.object({ segmentId: z.string(), title: z.string(), startSeconds: z.number(), line: z.string(), problems: z.array(z.string()) })),
+  problems: z.array(z.string()),
+  valid: z.boolean(),
+  text: z.string(),
+});
+const totalsSchema = z.object({
+  frames: z.number(),
+  timecode: z.string(),
+  seconds: z.number(),
+  targetFrames: z.number().nullable(),
+  overFrames: z.number().nullable(),
+  overSeconds: z.number().nullable(),
+  byKind: z.record(z.string(), z.number()),
+  byStep: z.record(z.string(), z.number()),
+});
+const rateSchema = z.object({ id: z.string(), dropFrame: z.boolean(), num: z.number(), den: z.number() });
+const scriptSchema = z
+  .object({ rate: rateSchema, wordsPerMinute: z.number(), segments: z.array(segmentSchema.extend({ timing: segmentTimingSchema })), totals: totalsSchema, chapters: chaptersSchema })
+  .meta({ id: "Script" });
+const conflictNote = "409 answers error.current with the stored segment";
+
 export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/health", summary: "Database and storage status", auth: false, response: z.object({ ok: z.boolean(), database: z.object({ ok: z.boolean() }), storage: z.object({ ok: z.boolean() }) }), errors: [503] },
   { method: "get", path: "/api/channels", summary: "Channels I belong to, with my roles", response: z.object({ channels: z.array(channelSchema) }), errors: [401] },
@@ -124,6 +177,19 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/channels/{channelId}/tools", summary: "Add a tool to the shelf", body: toolCreateSchema, response: z.object({ tool: toolSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
   { method: "patch", path: "/api/tools/{toolId}", summary: "Edit a tool", body: toolUpdateSchema, response: z.object({ tool: toolSchema }), errors: [400, 401, 403, 404, 422] },
   { method: "delete", path: "/api/tools/{toolId}", summary: "Take a tool off the shelf (archive)", response: okSchema, errors: [401, 403, 404, 409] },
+  { method: "get", path: "/api/episodes/{episodeId}/script", summary: "The timed script: segments, timecodes at the episode's rate, totals, chapters", response: scriptSchema, errors: [401, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/script", summary: "Add a segment (after afterId, or at the end)", body: segmentCreateSchema, response: z.object({ segment: segmentSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "put", path: "/api/episodes/{episodeId}/script/order", summary: "Set the order of all segments", body: segmentOrderSchema, response: okSchema, errors: [400, 401, 403, 404, 409] },
+  { method: "get", path: "/api/episodes/{episodeId}/script/timing", summary: "Computed timing at a chosen frame rate (query rate, dropFrame)", query: timingQuerySchema, response: z.object({ rate: rateSchema, wordsPerMinute: z.number(), totals: totalsSchema, chapters: chaptersSchema, segments: z.array(segmentTimingSchema.extend({ id: z.string(), kind: z.string(), stepId: z.string().nullable() })) }), errors: [400, 401, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/script/export", summary: "Export the script as plain text or JSON (query format)", query: exportQuerySchema, response: z.string(), errors: [400, 401, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/script/revisions", summary: "Revision history of the script (who, when, before and after)", response: z.object({ revisions: z.array(z.object({ id: z.string(), segmentId: z.string().nullable(), before: z.unknown(), after: z.unknown(), createdAt: z.string(), userName: z.string().nullable() })) }), errors: [401, 404] },
+  { method: "post", path: "/api/script-revisions/{revisionId}/restore", summary: "Restore a segment as it was at a revision", response: z.object({ segment: segmentSchema }), errors: [401, 403, 404, 409] },
+  { method: "patch", path: "/api/segments/{segmentId}", summary: `Save a segment based on a version; a stale version writes nothing (${conflictNote}). Editors may change only notes and chapter flags.`, body: segmentSaveSchema, response: z.object({ segment: segmentSchema }), errors: [400, 401, 403, 404, 409, 422] },
+  { method: "delete", path: "/api/segments/{segmentId}", summary: "Delete a segment (kept in the revision history)", response: okSchema, errors: [401, 403, 404] },
+  { method: "post", path: "/api/segments/{segmentId}/split", summary: `Split a segment at the cursor (${conflictNote})`, body: segmentSplitSchema, response: z.object({ first: segmentSchema, second: segmentSchema }), status: 201, errors: [400, 401, 403, 404, 409] },
+  { method: "post", path: "/api/segments/{segmentId}/join", summary: `Join the next segment onto this one (${conflictNote})`, body: segmentJoinSchema, response: z.object({ segment: segmentSchema }), errors: [400, 401, 403, 404, 409] },
+  { method: "get", path: "/api/me", summary: "Me, with my reading rate", response: z.object({ user: z.object({ id: z.string(), email: z.string(), name: z.string(), readingRateWpm: z.number() }) }), errors: [401] },
+  { method: "patch", path: "/api/me", summary: "Set my reading rate (100-220 words a minute)", body: readingRateSchema, response: z.object({ user: z.object({ id: z.string(), readingRateWpm: z.number() }) }), errors: [400, 401] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];

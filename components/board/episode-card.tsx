@@ -15,6 +15,20 @@ function runtime(seconds: number | null) {
   return `${Math.floor(seconds / 60)}:${String(seconds % 60).padStart(2, "0")}`;
 }
 
+function scriptFigure(e: EpisodeDto): string {
+  if (e.scriptSeconds == null) return "—";
+  if (e.targetRuntimeSeconds == null) return runtime(e.scriptSeconds);
+  // Arrow as well as position so the state is not told by colour alone.
+  return `${runtime(e.scriptSeconds)}${e.scriptSeconds > e.targetRuntimeSeconds ? "↑" : "↓"}`;
+}
+
+function scriptTitle(e: EpisodeDto): string {
+  if (e.scriptSeconds == null) return "No script yet";
+  if (e.targetRuntimeSeconds == null) return `Script runs about ${runtime(e.scriptSeconds)}; no target set`;
+  const d = e.scriptSeconds - e.targetRuntimeSeconds;
+  return `Script runs about ${runtime(e.scriptSeconds)} against a target of ${runtime(e.targetRuntimeSeconds)}: ${runtime(Math.abs(d))} ${d > 0 ? "over" : "under"}`;
+}
+
 export interface MoveRequest {
   id: string;
   stage: Stage;
@@ -109,14 +123,16 @@ export function EpisodeCard({
           {/* Progress figures, filled in as the script, shots, coverage and sponsor work land. */}
           <dl className="mt-1.5 grid grid-cols-4 divide-x divide-timber-200 rounded-plank border border-timber-200 text-center">
             {[
-              ["Script", "Estimated script runtime against target"],
-              ["Shots", "Shots captured of planned"],
-              ["Gaps", "Open B-roll gaps"],
-              ["Sponsor", "Sponsor sign-off"],
-            ].map(([label, title]) => (
+              ["Script", scriptTitle(episode), scriptFigure(episode)],
+              ["Shots", "Shots captured of planned", "—"],
+              ["Gaps", "Open B-roll gaps", "—"],
+              ["Sponsor", "Sponsor sign-off", "—"],
+            ].map(([label, title, value]) => (
               <div key={label} title={title} className="px-0.5 py-0.5">
                 <dt className="text-[10px] uppercase tracking-wide text-walnut-600">{label}</dt>
-                <dd className="num text-xs">—</dd>
+                <dd className="num text-xs" data-testid={label === "Script" ? "card-script" : undefined}>
+                  {value}
+                </dd>
               </div>
             ))}
           </dl>

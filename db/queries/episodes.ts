@@ -17,6 +17,7 @@ export function toEpisodeDto(e: Episode): EpisodeDto {
     publishDate: e.publishDate,
     frameRate: e.frameRate,
     dropFrame: e.dropFrame,
+    presenterId: e.presenterId,
     createdBy: e.createdBy,
     updatedBy: e.updatedBy,
     createdAt: e.createdAt.toISOString(),

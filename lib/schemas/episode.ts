@@ -58,6 +58,7 @@ export const episodeUpdateSchema = z
     dropFrame: episodeFields.dropFrame,
     stage: stageSchema,
     position: z.number().int("must be a whole number").min(0, "must be 0 or more").max(100000),
+    presenterId: z.uuid({ message: "must be a member's id" }).nullable(),
   })
   .partial()
   .strict()
@@ -87,11 +88,14 @@ export const episodeSchema = z
     publishDate: z.string().nullable(),
     frameRate: frameRateSchema,
     dropFrame: z.boolean(),
+    presenterId: z.string().nullable(),
     createdBy: z.string().nullable(),
     updatedBy: z.string().nullable(),
     createdAt: z.string(),
     updatedAt: z.string(),
     archivedAt: z.string().nullable(),
+    /** Estimated script runtime (board list only). */
+    scriptSeconds: z.number().nullable().optional(),
   })
   .meta({ id: "Episode" });
 export type EpisodeDto = z.infer<typeof episodeSchema>;

@@ -21,13 +21,20 @@ export class AppError extends Error {
   readonly code: string;
   readonly fields?: Record<string, string[]>;
   readonly headers?: Record<string, string>;
+  /** The stored record a conflict was about, so the client can show both sides. */
+  readonly current?: unknown;
 
-  constructor(code: `${ErrorKind}${string}`, message: string, opts: { fields?: Record<string, string[]>; headers?: Record<string, string> } = {}) {
+  constructor(
+    code: `${ErrorKind}${string}`,
+    message: string,
+    opts: { fields?: Record<string, string[]>; headers?: Record<string, string>; current?: unknown } = {},
+  ) {
     super(message);
     this.code = code;
     this.kind = code.split(":")[0] as ErrorKind;
     this.fields = opts.fields;
     this.headers = opts.headers;
+    this.current = opts.current;
   }
 
   get status(): number {
@@ -53,7 +60,7 @@ export function validationError(error: z.ZodError, what = "request"): AppError {
 }
 
 export function errorBody(e: AppError) {
-  return { error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}) } };
+  return { error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}), ...(e.current !== undefined ? { current: e.current } : {}) } };
 }
 
 export function toResponse(e: unknown): Response {

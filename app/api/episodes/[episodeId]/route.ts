@@ -5,6 +5,7 @@ import { AppError } from "@/lib/server/errors";
 import { episodeUpdateSchema } from "@/lib/schemas/episode";
 import { archiveEpisode, toEpisodeDto, updateEpisode } from "@/db/queries/episodes";
 import { recordAudit } from "@/db/queries/audit";
+import { getMembership } from "@/db/queries/channels";
 
 type P = { episodeId: string };
 
@@ -22,6 +23,9 @@ export const PATCH = route<P>(async (req, params) => {
   const { episode, access } = await load(user.id, params.episodeId);
   const { stage, position, ...fields } = patch;
   if (Object.keys(fields).length > 0) assertCan(access, "episode.edit");
+  if (patch.presenterId && !(await getMembership({ userId: patch.presenterId, channelId: episode.channelId }))) {
+    throw new AppError("unprocessable:episode.presenter", "The presenter must be a member of this channel.", { fields: { presenterId: ["not a member of this channel"] } });
+  }
   const result = await updateEpisode({
     id: episode.id,
     channelId: episode.channelId,

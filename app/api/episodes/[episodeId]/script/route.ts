@@ -1,0 +1,28 @@
+import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { loadEpisode } from "@/lib/server/loaders";
+import { segmentCreateSchema } from "@/lib/schemas/script";
+import { createSegment, toSegmentDto } from "@/db/queries/script";
+import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { scriptViewFor } from "@/lib/server/script-view";
+import { AppError } from "@/lib/server/errors";
+
+type P = { episodeId: string };
+
+/** The script: segments with timing at the episode's rate, totals and chapters. */
+export const GET = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { episode } = await loadEpisode(user.id, params.episodeId);
+  return json(await scriptViewFor(episode));
+});
+
+export const POST = route<P>(async (req, params) => {
+  const input = await parseBody(req, segmentCreateSchema, "segment");
+  const user = await sessionUser(req);
+  const { episode } = await loadEpisode(user.id, params.episodeId, "script.write");
+  if (input.stepId && !(await stepIdsOfEpisode({ episodeId: episode.id })).some((s) => s.id === input.stepId)) {
+    throw new AppError("unprocessable:segment.step", "That build step is not in this episode.", { fields: { stepId: ["not a step of this episode"] } });
+  }
+  const r = await createSegment({ episodeId: episode.id, userId: user.id, input });
+  if ("error" in r) throw new AppError("unprocessable:segment.after", "The segment to insert after is not in this script.", { fields: { afterId: ["not in this script"] } });
+  return json({ segment: toSegmentDto(r.segment) }, 201);
+});

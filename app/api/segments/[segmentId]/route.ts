@@ -1,0 +1,42 @@
+import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { loadSegment } from "@/lib/server/segment-loader";
+import { assertCan } from "@/lib/server/access";
+import { ANNOTATION_FIELDS, segmentSaveSchema } from "@/lib/schemas/script";
+import { deleteSegment, saveSegment, toSegmentDto } from "@/db/queries/script";
+import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { AppError } from "@/lib/server/errors";
+
+type P = { segmentId: string };
+
+/**
+ * Saves a segment. The body names the version it was based on; if someone
+ * saved in between, nothing is written and the answer is 409 with the newer
+ * segment in error.current, so the writer can merge instead of overwriting.
+ */
+export const PATCH = route<P>(async (req, params) => {
+  const save = await parseBody(req, segmentSaveSchema, "segment");
+  const user = await sessionUser(req);
+  const { segment, access } = await loadSegment(user.id, params.segmentId);
+  const { version: _v, ...fields } = save;
+  const annotationOnly = Object.keys(fields).every((k) => (ANNOTATION_FIELDS as readonly string[]).includes(k));
+  assertCan(access, annotationOnly ? "script.annotate" : "script.write");
+  if (fields.stepId && !(await stepIdsOfEpisode({ episodeId: segment.episodeId })).some((s) => s.id === fields.stepId)) {
+    throw new AppError("unprocessable:segment.step", "That build step is not in this episode.", { fields: { stepId: ["not a step of this episode"] } });
+  }
+  const r = await saveSegment({ id: segment.id, userId: user.id, save });
+  if ("missing" in r) throw new AppError("not_found:segment", "This segment was deleted meanwhile.");
+  if ("conflict" in r) {
+    throw new AppError("conflict:segment.version", "Someone saved this segment after you loaded it. Nothing was overwritten: compare both versions and merge.", {
+      current: toSegmentDto(r.conflict!),
+    });
+  }
+  return json({ segment: toSegmentDto(r.segment) });
+});
+
+export const DELETE = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { segment, access } = await loadSegment(user.id, params.segmentId);
+  assertCan(access, "script.write");
+  await deleteSegment({ id: segment.id, userId: user.id });
+  return json({ ok: true });
+});

@@ -1,0 +1,358 @@
+"use client";
+import { forwardRef, useCallback, useEffect, useImperativeHandle, useRef, useState } from "react";
+import { useSortable } from "@dnd-kit/sortable";
+import { CSS } from "@dnd-kit/utilities";
+import { SEGMENT_KINDS, SEGMENT_KIND_LABELS, type TimedSegment } from "@/lib/script-timing";
+import { formatTimecode, framesToSeconds, msToFrames, parseTimecode, type Rate } from "@/lib/timecode";
+import { proposeMerge } from "./merge";
+import { SaveError, send, type SegmentDto } from "./types";
+
+export type SaveState = "saved" | "pending" | "saving" | "offline" | "conflict";
+
+export interface SegmentHandle {
+  /** Saves any pending text now; resolves to the stored segment or null when it could not be saved. */
+  flush(): Promise<SegmentDto | null>;
+  focusAt(pos: "start" | "end"): void;
+}
+
+interface Props {
+  segment: SegmentDto;
+  index: number;
+  timing: TimedSegment | undefined;
+  rate: Rate;
+  steps: { id: string; title: string }[];
+  canWrite: boolean;
+  canAnnotate: boolean;
+  chapterProblems: string[];
+  onDraft: (id: string, text: string) => void;
+  onSaved: (s: SegmentDto) => void;
+  onState: (id: string, s: SaveState) => void;
+  onSplit: (id: string, before: string, after: string) => void;
+  onJoinPrevious: (id: string) => void;
+  onMove: (id: string, delta: -1 | 1) => void;
+  onInsertAfter: (id: string) => void;
+  onDelete: (id: string) => void;
+}
+
+const DEBOUNCE_MS = 700;
+
+function secs(frames: number, rate: Rate) {
+  return framesToSeconds(frames, rate).toFixed(1);
+}
+
+export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEditor(props, ref) {
+  const { segment, index, timing, rate, steps, canWrite, canAnnotate, chapterProblems } = props;
+  const [base, setBase] = useState(segment);
+  const [text, setText] = useState(segment.text);
+  const [state, setState] = useState<SaveState>("saved");
+  const [conflict, setConflict] = useState<{ theirs: SegmentDto; mine: string; merged: string } | null>(null);
+  const [fieldError, setFieldError] = useState<string | null>(null);
+  const [pinText, setPinText] = useState(segment.pinnedStartFrame != null ? formatTimecode(segment.pinnedStartFrame, rate) : "");
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const inflight = useRef<Promise<SegmentDto | null> | null>(null);
+  const textRef = useRef(text);
+  const baseRef = useRef(base);
+  const area = useRef<HTMLTextAreaElement>(null);
+  textRef.current = text;
+  baseRef.current = base;
+
+  // A newer stored version arrives (someone else, or a structural change): adopt it unless we hold unsaved words.
+  useEffect(() => {
+    if (segment.version > baseRef.current.version) {
+      const dirty = textRef.current !== baseRef.current.text;
+      setBase(segment);
+      if (!dirty) setText(segment.text);
+      setPinText(segment.pinnedStartFrame != null ? formatTimecode(segment.pinnedStartFrame, rate) : "");
+    }
+  }, [segment, rate]);
+
+  const report = useCallback(
+    (s: SaveState) => {
+      setState(s);
+      props.onState(segment.id, s);
+    },
+    [segment.id],
+  );
+
+  const save = useCallback(
+    async (fields: Partial<SegmentDto>): Promise<SegmentDto | null> => {
+      const version = baseRef.current.version;
+      report("saving");
+      try {
+        const { segment: stored } = await send<{ segment: SegmentDto }>(`/api/segments/${segment.id}`, "PATCH", { version, ...fields });
+        setBase(stored);
+        baseRef.current = stored;
+        props.onSaved(stored);
+        setFieldError(null);
+        report(textRef.current === stored.text ? "saved" : "pending");
+        return stored;
+      } catch (e) {
+        const err = e as SaveError;
+        if (err.status === 409 && err.current) {
+          setConflict({ theirs: err.current, mine: textRef.current, merged: proposeMerge(textRef.current, err.current.text) });
+          report("conflict");
+        } else if (err.status === 0) {
+          report("offline");
+          timer.current = setTimeout(() => void flushText(), 3000);
+        } else {
+          setFieldError(err.fields ? Object.values(err.fields).flat().join("; ") : err.message);
+          report("pending");
+        }
+        return null;
+      }
+    },
+    [segment.id],
+  );
+
+  const flushText = useCallback(async (): Promise<SegmentDto | null> => {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
+    if (inflight.current) await inflight.current;
+    if (conflictRef.current) return null;
+    if (textRef.current === baseRef.current.text) return baseRef.current;
+    const p = save({ text: textRef.current });
+    inflight.current = p;
+    const r = await p;
+    inflight.current = null;
+    // Words typed while that save was on its way go out next.
+    if (r && textRef.current !== r.text) return flushText();
+    return r;
+  }, [save]);
+  const conflictRef = useRef(conflict);
+  conflictRef.current = conflict;
+
+  useImperativeHandle(ref, () => ({
+    flush: flushText,
+    focusAt(pos) {
+      const el = area.current;
+      if (!el) return;
+      el.focus();
+      const at = pos === "start" ? 0 : el.value.length;
+      el.setSelectionRange(at, at);
+    },
+  }));
+
+  useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
+
+  function onChange(v: string) {
+    setText(v);
+    props.onDraft(segment.id, v);
+    report("pending");
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(() => void flushText(), DEBOUNCE_MS);
+  }
+
+  async function resolve(textToSave: string) {
+    if (!conflict) return;
+    baseRef.current = conflict.theirs;
+    setBase(conflict.theirs);
+    setConflict(null);
+    conflictRef.current = null;
+    setText(textToSave);
+    textRef.current = textToSave;
+    props.onDraft(segment.id, textToSave);
+    await save({ text: textToSave });
+  }
+
+  const { attributes, listeners, setNodeRef, transform, transition } = useSortable({ id: segment.id, disabled: !canWrite });
+  const drift = timing?.drift ?? null;
+  const driftText =
+    drift == null ? null : drift === 0 ? "on the pin" : drift > 0 ? `the script before runs ${secs(drift, rate)} s past this pin` : `the script before ends ${secs(-drift, rate)} s before this pin`;
+
+  return (
+    <li ref={setNodeRef} style={{ transform: CSS.Transform.toString(transform), transition }} className="grid grid-cols-[7.5rem_1fr] gap-3 rounded-plank border border-timber-300 bg-white p-3" data-testid="segment" data-segment-id={segment.id}>
+      <div className="space-y-1 text-xs">
+        <div className="flex items-center gap-1">
+          {canWrite ? (
+            <button type="button" className="cursor-grab rounded-plank px-1 text-walnut-500 hover:bg-timber-100" aria-label={`Drag segment ${index + 1} to reorder`} {...attributes} {...listeners}>
+              ⠿
+            </button>
+          ) : null}
+          <span className="num text-walnut-600">#{index + 1}</span>
+        </div>
+        <p className="num text-sm text-walnut-900" data-testid="segment-start" title="start">
+          {timing ? formatTimecode(timing.start, rate) : "—"}
+        </p>
+        <p className="num text-walnut-600" title="end">
+          {timing ? formatTimecode(timing.end, rate) : ""}
+        </p>
+        <p className="num text-walnut-600">{timing ? `${secs(timing.duration, rate)} s · ${timing.words} w` : ""}</p>
+        {driftText ? (
+          <p className={`rounded-plank border px-1 ${drift === 0 ? "border-[#2f6b3a] text-[#1d4a26]" : "border-[#9b5b00] text-[#6b3f00]"}`} data-testid="drift">
+            Drift: {driftText}
+          </p>
+        ) : null}
+        <p aria-live="polite" className="text-walnut-600" data-testid="save-state">
+          {state === "saved" ? "Saved" : state === "saving" ? "Saving…" : state === "pending" ? "Unsaved" : state === "offline" ? "Offline, retrying" : "Needs merge"}
+        </p>
+      </div>
+      <div className="min-w-0 space-y-2">
+        <div className="flex flex-wrap items-center gap-2 text-sm">
+          <select aria-label="Segment kind" disabled={!canWrite} className="rounded-plank border border-timber-300 bg-white px-1 py-0.5" value={base.kind} onChange={(e) => void save({ kind: e.target.value as SegmentDto["kind"] })}>
+            {SEGMENT_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {SEGMENT_KIND_LABELS[k]}
+              </option>
+            ))}
+          </select>
+          <select aria-label="Build step" disabled={!canWrite} className="max-w-56 rounded-plank border border-timber-300 bg-white px-1 py-0.5" value={base.stepId ?? ""} onChange={(e) => void save({ stepId: e.target.value || null })}>
+            <option value="">No build step</option>
+            {steps.map((s) => (
+              <option key={s.id} value={s.id}>
+                {s.title}
+              </option>
+            ))}
+          </select>
+          <label className="flex items-center gap-1">
+            <span className="text-walnut-700">Pin at</span>
+            <input
+              aria-label="Pinned start timecode"
+              disabled={!canWrite}
+              className="num w-32 rounded-plank border border-timber-300 px-1 py-0.5"
+              placeholder={rate.dropFrame ? "00:00:00;00" : "00:00:00:00"}
+              value={pinText}
+              onChange={(e) => setPinText(e.target.value)}
+              onBlur={() => {
+                const v = pinText.trim();
+                if (!v) {
+                  if (base.pinnedStartFrame != null) void save({ pinnedStartFrame: null });
+                  return;
+                }
+                const p = parseTimecode(v, rate);
+                if (!p.ok) return setFieldError(`Pin: ${p.message}`);
+                setPinText(formatTimecode(p.frames, rate));
+                if (p.frames !== base.pinnedStartFrame) void save({ pinnedStartFrame: p.frames });
+              }}
+            />
+          </label>
+          <label className="flex items-center gap-1">
+            <span className="text-walnut-700">Fixed length (s)</span>
+            <input
+              aria-label="Fixed length in seconds"
+              disabled={!canWrite}
+              inputMode="decimal"
+              className="num w-16 rounded-plank border border-timber-300 px-1 py-0.5"
+              defaultValue={base.explicitDurationFrames != null ? secs(base.explicitDurationFrames, rate) : ""}
+              onBlur={(e) => {
+                const v = e.target.value.trim();
+                if (!v) return void (base.explicitDurationFrames != null && save({ explicitDurationFrames: null }));
+                const n = Number(v);
+                if (!Number.isFinite(n) || n < 0) return setFieldError("Fixed length: enter seconds, e.g. 4.5");
+                void save({ explicitDurationFrames: msToFrames(n * 1000, rate) });
+              }}
+            />
+          </label>
+        </div>
+        <textarea
+          ref={area}
+          aria-label={`Segment ${index + 1} text`}
+          readOnly={!canWrite}
+          value={text}
+          rows={Math.max(2, Math.ceil(text.length / 90))}
+          className="w-full resize-y rounded-plank border border-timber-200 bg-timber-50/40 px-2 py-1.5 text-[15px] leading-relaxed focus:bg-white"
+          onChange={(e) => onChange(e.target.value)}
+          onBlur={() => void flushText()}
+          onKeyDown={(e) => {
+            if (!canWrite) return;
+            const el = e.currentTarget;
+            if ((e.ctrlKey || e.metaKey) && e.key === "Enter") {
+              e.preventDefault();
+              props.onSplit(segment.id, el.value.slice(0, el.selectionStart), el.value.slice(el.selectionEnd));
+            } else if (e.key === "Backspace" && el.selectionStart === 0 && el.selectionEnd === 0 && index > 0) {
+              e.preventDefault();
+              props.onJoinPrevious(segment.id);
+            } else if (e.altKey && (e.key === "ArrowUp" || e.key === "ArrowDown")) {
+              e.preventDefault();
+              props.onMove(segment.id, e.key === "ArrowUp" ? -1 : 1);
+            }
+          }}
+        />
+        {fieldError ? (
+          <p role="alert" className="text-sm text-[#9b0d23]">
+            {fieldError}
+          </p>
+        ) : null}
+        {conflict ? (
+          <div className="space-y-2 rounded-plank border-2 border-[#9b5b00] bg-[#fff7e8] p-2 text-sm" data-testid="conflict" role="group" aria-label="Merge two versions">
+            <p className="font-medium">Someone else saved this segment while you were writing. Nothing was overwritten. Choose what to keep:</p>
+            <div className="grid gap-2 sm:grid-cols-2">
+              <div>
+                <p className="text-xs font-bold">Your words</p>
+                <p className="whitespace-pre-wrap rounded-plank bg-white p-1" data-testid="conflict-mine">
+                  {conflict.mine}
+                </p>
+              </div>
+              <div>
+                <p className="text-xs font-bold">Saved by someone else (version {conflict.theirs.version})</p>
+                <p className="whitespace-pre-wrap rounded-plank bg-white p-1" data-testid="conflict-theirs">
+                  {conflict.theirs.text}
+                </p>
+              </div>
+            </div>
+            <label className="block text-xs font-bold" htmlFor={`merge-${segment.id}`}>
+              Merged text
+            </label>
+            <textarea id={`merge-${segment.id}`} className="w-full rounded-plank border border-timber-300 bg-white p-1" rows={4} value={conflict.merged} onChange={(e) => setConflict({ ...conflict, merged: e.target.value })} />
+            <div className="flex flex-wrap gap-2">
+              <button type="button" className="rounded-plank border border-chalk-700 bg-chalk-600 px-2 py-1 text-white" onClick={() => void resolve(conflict.merged)}>
+                Save merged text
+              </button>
+              <button type="button" className="rounded-plank border border-timber-300 bg-white px-2 py-1" onClick={() => void resolve(conflict.mine)}>
+                Keep mine
+              </button>
+              <button type="button" className="rounded-plank border border-timber-300 bg-white px-2 py-1" onClick={() => void resolve(conflict.theirs.text)}>
+                Take theirs
+              </button>
+            </div>
+          </div>
+        ) : null}
+        <div className="flex flex-wrap items-center gap-3 text-sm">
+          <label className="flex items-center gap-1">
+            <input type="checkbox" className="accent-chalk-600" disabled={!canAnnotate} checked={base.chapterStart} onChange={(e) => void save({ chapterStart: e.target.checked })} />
+            Chapter starts here
+          </label>
+          {base.chapterStart ? (
+            <input
+              aria-label="Chapter title"
+              disabled={!canAnnotate}
+              className="rounded-plank border border-timber-300 px-1 py-0.5"
+              defaultValue={base.chapterTitle ?? ""}
+              placeholder="Chapter title"
+              onBlur={(e) => e.target.value !== (base.chapterTitle ?? "") && void save({ chapterTitle: e.target.value || null })}
+            />
+          ) : null}
+          {chapterProblems.map((p) => (
+            <span key={p} className="rounded-plank border border-[#9b0d23] px-1 text-xs text-[#9b0d23]" data-testid="chapter-problem">
+              Chapter: {p}
+            </span>
+          ))}
+        </div>
+        <label className="block text-xs text-walnut-700">
+          Note to the editor
+          <input
+            className="mt-0.5 block w-full rounded-plank border border-timber-200 px-1 py-0.5 text-sm"
+            disabled={!canAnnotate}
+            defaultValue={base.editorNotes}
+            onBlur={(e) => e.target.value !== base.editorNotes && void save({ editorNotes: e.target.value })}
+          />
+        </label>
+        {canWrite ? (
+          <div className="flex flex-wrap gap-2 text-xs">
+            <button type="button" className="rounded-plank border border-timber-300 px-2 py-0.5 hover:bg-timber-100" onClick={() => props.onInsertAfter(segment.id)}>
+              Insert segment after
+            </button>
+            <button type="button" className="rounded-plank border border-timber-300 px-2 py-0.5 hover:bg-timber-100" onClick={() => props.onMove(segment.id, -1)} aria-label={`Move segment ${index + 1} up`}>
+              ↑
+            </button>
+            <button type="button" className="rounded-plank border border-timber-300 px-2 py-0.5 hover:bg-timber-100" onClick={() => props.onMove(segment.id, 1)} aria-label={`Move segment ${index + 1} down`}>
+              ↓
+            </button>
+            <button type="button" className="rounded-plank border border-timber-300 px-2 py-0.5 hover:bg-timber-100" onClick={() => props.onDelete(segment.id)}>
+              Delete
+            </button>
+          </div>
+        ) : null}
+      </div>
+    </li>
+  );
+});

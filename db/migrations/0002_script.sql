@@ -1,0 +1,2 @@
+ALTER TABLE "episodes" ADD COLUMN "presenter_id" uuid;--> statement-breakpoint
+ALTER TABLE "episodes" ADD CONSTRAINT "episodes_presenter_id_users_id_fk" FOREIGN KEY ("presenter_id") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;

@@ -1,0 +1,74 @@
+import "server-only";
+import { timeScript, DEFAULT_WPM, type SegmentKind } from "../script-timing";
+import { buildChapters } from "../chapters";
+import { formatTimecode, framesToSeconds, rateOf } from "../timecode";
+import type { FrameRateId } from "../frame-rate";
+import type { Episode } from "../../db/schema";
+import { listSegmentsByEpisode, toSegmentDto, type Segment } from "../../db/queries/script";
+import { getUserById } from "../../db/queries/users";
+
+export async function presenterWpm(episode: Episode): Promise<number> {
+  if (!episode.presenterId) return DEFAULT_WPM;
+  return (await getUserById({ id: episode.presenterId }))?.readingRateWpm ?? DEFAULT_WPM;
+}
+
+/** Segments with their computed timing, totals and chapters at a rate (the episode's unless asked). */
+export function scriptView(episode: Episode, segments: Segment[], wpm: number, override?: { rate?: FrameRateId; dropFrame?: boolean }) {
+  const rateId = override?.rate ?? episode.frameRate;
+  const dropFrame = override?.rate ? Boolean(override.dropFrame) : override?.dropFrame ?? episode.dropFrame;
+  const rate = rateOf(rateId, dropFrame && (rateId === "29.97" || rateId === "59.94"));
+  const timing = timeScript(
+    segments.map((s) => ({ id: s.id, kind: s.kind as SegmentKind, text: s.text, stepId: s.stepId, pinnedStartFrame: s.pinnedStartFrame, explicitDurationFrames: s.explicitDurationFrames })),
+    rate,
+    { wpm, targetSeconds: episode.targetRuntimeSeconds },
+  );
+  const chapters = buildChapters(
+    segments.flatMap((s, i) => (s.chapterStart ? [{ segmentId: s.id, title: s.chapterTitle ?? "", startFrame: timing.segments[i]!.start }] : [])),
+    timing.totalFrames,
+    rate,
+  );
+  const tc = (f: number) => formatTimecode(f, rate);
+  return {
+    rate: { id: rateId, dropFrame: rate.dropFrame, num: rate.num, den: rate.den },
+    wordsPerMinute: wpm,
+    segments: segments.map((s, i) => {
+      const t = timing.segments[i]!;
+      return { ...toSegmentDto(s), timing: { ...t, startTimecode: tc(t.start), endTimecode: tc(t.end), durationSeconds: framesToSeconds(t.duration, rate) } };
+    }),
+    totals: {
+      frames: timing.totalFrames,
+      timecode: tc(timing.totalFrames),
+      seconds: framesToSeconds(timing.totalFrames, rate),
+      targetFrames: timing.targetFrames,
+      overFrames: timing.overFrames,
+      overSeconds: timing.overFrames != null ? framesToSeconds(timing.overFrames, rate) : null,
+      byKind: timing.byKind,
+      byStep: timing.byStep,
+    },
+    chapters,
+  };
+}
+
+export async function scriptViewFor(episode: Episode, override?: { rate?: FrameRateId; dropFrame?: boolean }) {
+  const [segments, wpm] = await Promise.all([listSegmentsByEpisode({ episodeId: episode.id }), presenterWpm(episode)]);
+  return scriptView(episode, segments, wpm, override);
+}
+
+/** Estimated script runtime in seconds for each episode on the board (null when it has no script). */
+export async function scriptRuntimes(episodes: Episode[]): Promise<Map<string, number | null>> {
+  const { listSegmentsByEpisodes } = await import("../../db/queries/script");
+  const segments = await listSegmentsByEpisodes({ episodeIds: episodes.map((e) => e.id) });
+  const rates = new Map<string, number>();
+  for (const e of episodes) if (e.presenterId && !rates.has(e.presenterId)) rates.set(e.presenterId, await presenterWpm(e));
+  const out = new Map<string, number | null>();
+  for (const e of episodes) {
+    const mine = segments.filter((s) => s.episodeId === e.id);
+    if (!mine.length) {
+      out.set(e.id, null);
+      continue;
+    }
+    const v = scriptView(e, mine, e.presenterId ? (rates.get(e.presenterId) ?? DEFAULT_WPM) : DEFAULT_WPM);
+    out.set(e.id, Math.round(v.totals.seconds));
+  }
+  return out;
+}
