@@ -131,3 +131,10 @@ export function formatClock(totalSeconds: number): string {
   const s = totalSeconds % 60;
   return h ? `${h}:${p2(m)}:${p2(s)}` : `${m}:${p2(s)}`;
 }
+
+/** A duration for summaries: 0:06.4, 12:30.0, 1:02:03.5 (wall-clock, tenths). */
+export function formatDuration(frames: number, rate: Rate): string {
+  const tenths = Math.round((frames * rate.den * 10) / rate.num);
+  const totalSeconds = Math.floor(tenths / 10);
+  return `${formatClock(totalSeconds)}.${tenths % 10}`;
+}

@@ -74,7 +74,19 @@ export function ReadThrough({ items, wpm }: { items: Item[]; wpm: number }) {
               {it.start} · {SEGMENT_KIND_LABELS[it.kind]}
               {it.step ? ` · ${it.step}` : ""}
             </p>
-            <p className="text-3xl leading-snug">{it.text || "…"}</p>
+            <p className="text-3xl leading-snug">
+              {it.text
+                ? it.text.split(/(\{\s*\d+(?:\.\d+)?\s*(?:s|ms)\s*\})/i).map((part, k) =>
+                    /^\{/.test(part) ? (
+                      <span key={k} className="mx-1 rounded-plank border border-walnut-500 px-1 align-middle text-base text-walnut-700">
+                        pause {part.replace(/[{}\s]/g, "")}
+                      </span>
+                    ) : (
+                      <span key={k}>{part}</span>
+                    ),
+                  )
+                : "…"}
+            </p>
           </li>
         ))}
       </ol>

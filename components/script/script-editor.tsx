@@ -6,7 +6,7 @@ import { DndContext, KeyboardSensor, PointerSensor, closestCenter, useSensor, us
 import { SortableContext, arrayMove, sortableKeyboardCoordinates, verticalListSortingStrategy } from "@dnd-kit/sortable";
 import { SEGMENT_KINDS, SEGMENT_KIND_LABELS, timeScript, MIN_WPM, MAX_WPM, type SegmentKind } from "@/lib/script-timing";
 import { buildChapters } from "@/lib/chapters";
-import { formatTimecode, framesToSeconds, type Rate } from "@/lib/timecode";
+import { formatDuration, formatTimecode, framesToSeconds, type Rate } from "@/lib/timecode";
 import { Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { SegmentEditor, type SaveState, type SegmentHandle } from "./segment-editor";
@@ -194,7 +194,7 @@ export function ScriptEditor(p: Props) {
           <span className="text-walnut-600">no target runtime set</span>
         )}
         <span className="text-walnut-700">
-          {SEGMENT_KINDS.filter((k) => t.byKind[k]).map((k) => `${SEGMENT_KIND_LABELS[k]} ${formatTimecode(t.byKind[k], rate).slice(3)}`).join(" · ")}
+          {SEGMENT_KINDS.filter((k) => t.byKind[k]).map((k) => `${SEGMENT_KIND_LABELS[k]} ${formatDuration(t.byKind[k], rate)}`).join(" · ")}
         </span>
         <span className="text-walnut-600">
           {data.rate.id} fps{data.rate.dropFrame ? " DF" : ""} · {data.wordsPerMinute} wpm
@@ -324,7 +324,7 @@ export function ScriptEditor(p: Props) {
             {Object.entries(t.byStep).map(([id, f]) => (
               <li key={id} className="flex justify-between gap-2">
                 <span>{stepTitle.get(id) ?? "removed step"}</span>
-                <span className="num">{formatTimecode(f, rate).slice(3)}</span>
+                <span className="num">{formatDuration(f, rate)}</span>
               </li>
             ))}
             {Object.keys(t.byStep).length === 0 ? <li className="text-walnut-700">Link segments to build steps to see this.</li> : null}
