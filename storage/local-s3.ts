@@ -7,6 +7,7 @@ import path from "node:path";
 // s3rver ships no types.
 // @ts-expect-error untyped package
 import S3rver from "s3rver";
+import { multipartExtension } from "./local-s3-multipart";
 
 const CORS = `<CORSConfiguration>
   <CORSRule>
@@ -36,6 +37,8 @@ export async function startLocalS3(opts: { directory: string; port: number; buck
     silent: true,
     configureBuckets: [{ name: opts.bucket, configs: [CORS] }],
   });
+  // Answer the multipart calls s3rver lacks before its own router sees them.
+  (server as { middleware: unknown[] }).middleware.unshift(multipartExtension(path.resolve(opts.directory)));
   await server.run();
   return {
     endpoint: `http://127.0.0.1:${opts.port}`,
