@@ -142,6 +142,7 @@ export const episodes = pgTable(
   (t) => [
     index("episodes_channel_stage_pos_idx").on(t.channelId, t.stage, t.position),
     index("episodes_channel_publish_idx").on(t.channelId, t.publishDate),
+    index("episodes_presenter_idx").on(t.presenterId),
     check("episodes_drop_frame_rate", sql`not ${t.dropFrame} or ${t.frameRate} in ('29.97','59.94')`),
   ],
 );
@@ -328,10 +329,16 @@ export const gaps = pgTable(
     source: text("source").notNull(),
     /** open | resolved | dismissed */
     status: text("status").notNull().default("open"),
+    /** voice_over | to_camera for computed gaps; marked gaps say nothing. */
+    reason: text("reason"),
     note: text("note").notNull().default(""),
     createdAt: createdAt(),
   },
-  (t) => [index("gaps_episode_idx").on(t.episodeId, t.status), check("gaps_range", sql`${t.endFrame} > ${t.startFrame}`)],
+  (t) => [
+    index("gaps_episode_idx").on(t.episodeId, t.status),
+    index("gaps_segment_idx").on(t.segmentId),
+    check("gaps_range", sql`${t.endFrame} > ${t.startFrame}`),
+  ],
 );
 
 export const shots = pgTable(
@@ -375,6 +382,7 @@ export const clips = pgTable(
     state: text("state").notNull().default("uploading"),
     originalName: text("original_name").notNull(),
     sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
+    partSize: bigint("part_size", { mode: "number" }),
     contentType: text("content_type").notNull(),
     durationMs: integer("duration_ms"),
     frameRate: text("frame_rate"),
@@ -401,6 +409,8 @@ export const coverageRanges = pgTable(
     id: id(),
     episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
     clipId: uuid("clip_id").references(() => clips.id, { onDelete: "cascade" }),
+    /** Where in the clip the range begins (frames at the episode's rate). */
+    clipInFrame: integer("clip_in_frame").notNull().default(0),
     startFrame: integer("start_frame").notNull(),
     endFrame: integer("end_frame").notNull(),
     note: text("note").notNull().default(""),
@@ -573,3 +583,5 @@ export type ScriptSegment = typeof scriptSegments.$inferSelect;
 export type Shot = typeof shots.$inferSelect;
 export type Clip = typeof clips.$inferSelect;
 export type MailMessage = typeof mailMessages.$inferSelect;
+export type Gap = typeof gaps.$inferSelect;
+export type CoverageRange = typeof coverageRanges.$inferSelect;

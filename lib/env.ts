@@ -26,6 +26,10 @@ const envSchema = z.object({
   NEXTAUTH_SECRET: z.string().min(32, "NEXTAUTH_SECRET must be at least 32 characters"),
   /** The dev-only mailbox page that shows what the local SMTP fake received. */
   DEV_MAILBOX: bool.default(true),
+  /** Largest footage file accepted (bytes); 64 GiB by default. */
+  UPLOAD_MAX_BYTES: z.coerce.number().int().min(1).default(64 * 1024 ** 3),
+  /** Preferred multipart part size (bytes), at least 5 MiB. */
+  UPLOAD_PART_BYTES: z.coerce.number().int().min(5 * 1024 * 1024).default(16 * 1024 * 1024),
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().min(1).default(5),
   SIGN_IN_WINDOW_SECONDS: z.coerce.number().int().min(10).default(900),
 });

@@ -12,6 +12,7 @@ import { materialCreateSchema, materialUpdateSchema, photoUploadSchema, stepCrea
 import { HAZARDS } from "./safety";
 import { exportQuerySchema, readingRateSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSplitSchema, timingQuerySchema } from "./schemas/script";
 import { SEGMENT_KINDS } from "./script-timing";
+import { clipUpdateSchema, coverageRangeSchema, gapCreateSchema, gapUpdateSchema, partsRequestSchema, pickupCreateSchema, shotBulkSchema, shotCreateSchema, shotUpdateSchema, uploadCreateSchema, SHOT_KINDS, SHOT_STATUSES } from "./schemas/footage";
 
 type Method = "get" | "post" | "patch" | "put" | "delete";
 interface RouteDoc {
@@ -141,6 +142,45 @@ const scriptSchema = z
   .object({ rate: rateSchema, wordsPerMinute: z.number(), segments: z.array(segmentSchema.extend({ timing: segmentTimingSchema })), totals: totalsSchema, chapters: chaptersSchema })
   .meta({ id: "Script" });
 const conflictNote = "409 answers error.current with the stored segment";
+const shotSchema = z
+  .object({ id: z.string(), kind: z.enum(SHOT_KINDS), description: z.string(), framing: z.string(), cameraNotes: z.string(), priority: z.number(), status: z.enum(SHOT_STATUSES), stepId: z.string().nullable(), segmentId: z.string().nullable(), shootDayId: z.string().nullable(), gapId: z.string().nullable(), position: z.number() })
+  .meta({ id: "Shot" });
+const clipSchema = z
+  .object({
+    id: z.string(),
+    episodeId: z.string(),
+    shotId: z.string().nullable(),
+    state: z.enum(["uploading", "stored"]),
+    originalName: z.string(),
+    sizeBytes: z.number(),
+    partSize: z.number().nullable(),
+    contentType: z.string(),
+    durationMs: z.number().nullable(),
+    frameRate: z.string().nullable(),
+    width: z.number().nullable(),
+    height: z.number().nullable(),
+    startTimecode: z.string().nullable(),
+    checksum: z.string().nullable(),
+    inFrame: z.number().nullable(),
+    outFrame: z.number().nullable(),
+    createdAt: z.string(),
+  })
+  .meta({ id: "Clip" });
+const gapViewSchema = z.object({ id: z.string().nullable(), key: z.string(), source: z.enum(["computed", "marked"]), reason: z.string().nullable(), status: z.enum(["open", "resolved", "dismissed"]), startFrame: z.number(), endFrame: z.number(), startTimecode: z.string(), endTimecode: z.string(), segmentId: z.string().nullable(), note: z.string() });
+const coverageSchema = z
+  .object({
+    rate: rateSchema,
+    totalFrames: z.number(),
+    segments: z.array(z.object({ id: z.string(), kind: z.string(), stepId: z.string().nullable(), text: z.string(), start: z.number(), end: z.number(), startTimecode: z.string(), endTimecode: z.string() })),
+    thresholds: z.object({ voiceOverGapFrames: z.number(), toCameraMaxFrames: z.number() }),
+    gaps: z.array(gapViewSchema),
+    openGaps: z.number(),
+    voiceOverFrames: z.number(),
+    coveredVoiceOverFrames: z.number(),
+    coverage: z.number(),
+    ranges: z.array(z.object({ id: z.string(), clipId: z.string().nullable(), clipInFrame: z.number(), startFrame: z.number(), endFrame: z.number(), startTimecode: z.string(), endTimecode: z.string(), note: z.string() })),
+  })
+  .meta({ id: "Coverage" });
 
 export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/health", summary: "Database and storage status", auth: false, response: z.object({ ok: z.boolean(), database: z.object({ ok: z.boolean() }), storage: z.object({ ok: z.boolean() }) }), errors: [503] },
@@ -190,6 +230,28 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/segments/{segmentId}/join", summary: `Join the next segment onto this one (${conflictNote})`, body: segmentJoinSchema, response: z.object({ segment: segmentSchema }), errors: [400, 401, 403, 404, 409] },
   { method: "get", path: "/api/me", summary: "Me, with my reading rate", response: z.object({ user: z.object({ id: z.string(), email: z.string(), name: z.string(), readingRateWpm: z.number() }) }), errors: [401] },
   { method: "patch", path: "/api/me", summary: "Set my reading rate (100-220 words a minute)", body: readingRateSchema, response: z.object({ user: z.object({ id: z.string(), readingRateWpm: z.number() }) }), errors: [400, 401] },
+  { method: "get", path: "/api/episodes/{episodeId}/shots", summary: "The shot list", response: z.object({ shots: z.array(shotSchema) }), errors: [401, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/shots", summary: "Add a shot (presenter, producer, editor, owner)", body: shotCreateSchema, response: z.object({ shot: shotSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "post", path: "/api/episodes/{episodeId}/shots/bulk", summary: "Set one status on many shots (all or none)", body: shotBulkSchema, response: z.object({ updated: z.number() }), errors: [400, 401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/shots/csv", summary: "Export the shot list as CSV", response: z.string(), errors: [401, 404] },
+  { method: "patch", path: "/api/shots/{shotId}", summary: "Edit a shot", body: shotUpdateSchema, response: z.object({ shot: shotSchema }), errors: [400, 401, 403, 404, 422] },
+  { method: "delete", path: "/api/shots/{shotId}", summary: "Delete a shot", response: okSchema, errors: [401, 403, 404] },
+  { method: "post", path: "/api/steps/{stepId}/planned-shots", summary: "Create the shots a build step's planned coverage asks for", response: z.object({ shots: z.array(shotSchema), skipped: z.number() }), status: 201, errors: [401, 403, 404, 422] },
+  { method: "post", path: "/api/episodes/{episodeId}/uploads", summary: "Start a multipart footage upload (type and size checked first; the key is generated)", body: uploadCreateSchema(64 * 1024 ** 3), response: z.object({ clip: clipSchema, partSize: z.number(), partCount: z.number() }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "get", path: "/api/clips/{clipId}/parts", summary: "Parts already stored (to resume)", response: z.object({ partSize: z.number(), partCount: z.number(), parts: z.array(z.object({ partNumber: z.number(), size: z.number() })) }), errors: [401, 403, 404, 409] },
+  { method: "post", path: "/api/clips/{clipId}/parts", summary: "Presigned PUT URLs for parts (15 minutes)", body: partsRequestSchema, response: z.object({ urls: z.array(z.object({ partNumber: z.number(), url: z.string() })), expiresAt: z.string() }), errors: [400, 401, 403, 404, 409] },
+  { method: "post", path: "/api/clips/{clipId}/complete", summary: "Finish an upload: every part checked, then metadata read from the stored object", response: z.object({ clip: clipSchema }), errors: [401, 403, 404, 409] },
+  { method: "get", path: "/api/clips/{clipId}", summary: "A clip with a playback URL (5 minutes)", response: z.object({ clip: clipSchema, playbackUrl: z.string().nullable() }), errors: [401, 404] },
+  { method: "patch", path: "/api/clips/{clipId}", summary: "Link a clip to a shot (marks it captured) or set in/out points", body: clipUpdateSchema, response: z.object({ clip: clipSchema }), errors: [400, 401, 403, 404, 422] },
+  { method: "delete", path: "/api/clips/{clipId}", summary: "Delete a clip and its stored object (or abort its upload)", response: okSchema, errors: [401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/clips", summary: "The episode's footage", response: z.object({ clips: z.array(clipSchema) }), errors: [401, 404] },
+  { method: "post", path: "/api/channels/{channelId}/uploads/cleanup", summary: "Abort uploads abandoned for more than a day (owner)", response: z.object({ abortedUploads: z.number(), removedClips: z.number() }), errors: [401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/coverage", summary: "B-roll coverage: segments, ranges, gaps, voice-over coverage", response: coverageSchema, errors: [401, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/coverage-ranges", summary: "Lay a clip or a marked range on the script timeline", body: coverageRangeSchema, response: z.object({ range: z.object({ id: z.string(), clipId: z.string().nullable(), startFrame: z.number(), endFrame: z.number() }) }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "delete", path: "/api/coverage-ranges/{rangeId}", summary: "Remove a range from the timeline", response: okSchema, errors: [401, 403, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/gaps", summary: "Mark a gap by hand, or keep a computed one with a status", body: gapCreateSchema, response: z.object({ gap: z.object({ id: z.string(), status: z.string(), source: z.string(), startFrame: z.number(), endFrame: z.number() }) }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "patch", path: "/api/gaps/{gapId}", summary: "Resolve, dismiss or reopen a gap", body: gapUpdateSchema, response: z.object({ gap: z.object({ id: z.string(), status: z.string(), note: z.string() }) }), errors: [400, 401, 403, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/pickups", summary: "Turn a gap into a pickup shot linked to the gap and its segment", body: pickupCreateSchema, response: z.object({ shot: shotSchema, gapId: z.string() }), status: 201, errors: [400, 401, 403, 404, 422] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];

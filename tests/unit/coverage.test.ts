@@ -30,7 +30,7 @@ describe("interval arithmetic against a frame-by-frame reference (fast-check)", 
       fc.property(intervals, intervals, (a, b) => {
         const fa = frames(a, SIZE);
         const fb = frames(b, SIZE);
-        expect(subtract(a, b)).toEqual(runs(fa.map((x, i) => x && !fb[i])));
+        expect(subtract(a, b)).toEqual(runs(fa.map((x, i) => x && !fb[i]!)));
       }),
       { numRuns: 500 },
     );
@@ -40,7 +40,7 @@ describe("interval arithmetic against a frame-by-frame reference (fast-check)", 
       fc.property(intervals, intervals, (a, b) => {
         const fa = frames(a, SIZE);
         const fb = frames(b, SIZE);
-        expect(intersect(a, b)).toEqual(runs(fa.map((x, i) => x && fb[i])));
+        expect(intersect(a, b)).toEqual(runs(fa.map((x, i) => x && fb[i]!)));
       }),
       { numRuns: 500 },
     );
@@ -60,8 +60,8 @@ describe("interval arithmetic against a frame-by-frame reference (fast-check)", 
         const b = frames(broll, size);
         const vo = frames(segs.filter((s) => s.kind === "voice_over" || s.kind === "sponsor_read"), size);
         const cam = frames(segs.filter((s) => s.kind === "to_camera"), size);
-        const expectedVo = runs(vo.map((x, i) => x && !b[i])).filter((g) => g.end - g.start > voGap);
-        const expectedCam = runs(cam.map((x, i) => x && !b[i])).filter((g) => g.end - g.start > camMax);
+        const expectedVo = runs(vo.map((x, i) => x && !b[i]!)).filter((g) => g.end - g.start > voGap);
+        const expectedCam = runs(cam.map((x, i) => x && !b[i]!)).filter((g) => g.end - g.start > camMax);
         expect(r.gaps.filter((g) => g.reason === "voice_over").map(({ start, end }) => ({ start, end }))).toEqual(expectedVo);
         expect(r.gaps.filter((g) => g.reason === "to_camera").map(({ start, end }) => ({ start, end }))).toEqual(expectedCam);
         expect(r.voiceOverFrames).toBe(vo.filter(Boolean).length);

@@ -1,0 +1,37 @@
+import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { loadEpisode } from "@/lib/server/loaders";
+import { coverageRangeSchema } from "@/lib/schemas/footage";
+import { createRange } from "@/db/queries/coverage";
+import { getClipById } from "@/db/queries/footage";
+import { msToFrames, rateOf } from "@/lib/timecode";
+import { settleGaps } from "@/lib/server/coverage-loader";
+import { AppError } from "@/lib/server/errors";
+
+type P = { episodeId: string };
+
+/**
+ * Lays B-roll on the script timeline: a clip placed at a frame (its in/out
+ * decide the length, unless an end is given), or a marked range.
+ */
+export const POST = route<P>(async (req, params) => {
+  const input = await parseBody(req, coverageRangeSchema, "coverage range");
+  const user = await sessionUser(req);
+  const { episode } = await loadEpisode(user.id, params.episodeId, "coverage.manage");
+  let endFrame = input.endFrame;
+  let clipInFrame = 0;
+  if (input.clipId) {
+    const clip = await getClipById({ id: input.clipId });
+    if (!clip || clip.episodeId !== episode.id) throw new AppError("unprocessable:range.clip", "That clip is not part of this episode's footage.", { fields: { clipId: ["not a clip of this episode"] } });
+    if (clip.state !== "stored") throw new AppError("unprocessable:range.clip", "That clip has not finished uploading.", { fields: { clipId: ["still uploading"] } });
+    clipInFrame = clip.inFrame ?? 0;
+    if (endFrame == null) {
+      const rate = rateOf(episode.frameRate, episode.dropFrame);
+      const length = clip.outFrame != null ? clip.outFrame - clipInFrame : clip.durationMs != null ? msToFrames(clip.durationMs, rate) - clipInFrame : null;
+      if (!length || length <= 0) throw new AppError("unprocessable:range.length", "The clip's length is unknown; give an end timecode.", { fields: { endFrame: ["give an end"] } });
+      endFrame = input.startFrame + length;
+    }
+  }
+  const row = await createRange({ episodeId: episode.id, clipId: input.clipId, clipInFrame, startFrame: input.startFrame, endFrame: endFrame!, note: input.note });
+  await settleGaps(episode);
+  return json({ range: { id: row.id, clipId: row.clipId, startFrame: row.startFrame, endFrame: row.endFrame } }, 201);
+});

@@ -1,0 +1,31 @@
+import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { loadEpisode } from "@/lib/server/loaders";
+import { assertCan } from "@/lib/server/access";
+import { pickupCreateSchema as schema } from "@/lib/schemas/footage";
+import { createPickup, linksBelong, toShotDto } from "@/db/queries/shots";
+import { getGapById } from "@/db/queries/coverage";
+import { formatTimecode, rateOf } from "@/lib/timecode";
+import { AppError } from "@/lib/server/errors";
+
+type P = { episodeId: string };
+
+/** Turns a gap into a pickup shot on the shot list, linked back to the gap and its segment. */
+export const POST = route<P>(async (req, params) => {
+  const input = await parseBody(req, schema, "pickup");
+  const user = await sessionUser(req);
+  const { episode, access } = await loadEpisode(user.id, params.episodeId, "coverage.manage");
+  assertCan(access, "shots.edit");
+  let gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: string | null };
+  if (input.gapId) {
+    const row = await getGapById({ id: input.gapId });
+    if (!row || row.gap.episodeId !== episode.id) throw new AppError("not_found:gap", "No such gap in this episode.");
+    gap = { id: row.gap.id, startFrame: row.gap.startFrame, endFrame: row.gap.endFrame, segmentId: row.gap.segmentId, reason: row.gap.reason };
+  } else {
+    if (await linksBelong({ episodeId: episode.id, segmentId: input.segmentId })) throw new AppError("unprocessable:gap.segment", "That segment is not in this episode.", { fields: { segmentId: ["not in this episode"] } });
+    gap = { startFrame: input.startFrame!, endFrame: input.endFrame!, segmentId: input.segmentId, reason: input.reason };
+  }
+  const rate = rateOf(episode.frameRate, episode.dropFrame);
+  const description = input.description || `Pickup: B-roll to cover ${formatTimecode(gap.startFrame, rate)}–${formatTimecode(gap.endFrame, rate)}`;
+  const { shot, gapId } = await createPickup({ episodeId: episode.id, gap, description, kind: input.kind });
+  return json({ shot: toShotDto(shot), gapId }, 201);
+});

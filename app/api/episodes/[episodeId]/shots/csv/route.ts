@@ -1,0 +1,19 @@
+import Papa from "papaparse";
+import { route, sessionUser } from "@/lib/server/api";
+import { loadEpisode } from "@/lib/server/loaders";
+import { listShotsByEpisode } from "@/db/queries/shots";
+import { stepIdsOfEpisode } from "@/db/queries/materials";
+
+type P = { episodeId: string };
+
+export const GET = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { episode } = await loadEpisode(user.id, params.episodeId);
+  const [shots, steps] = await Promise.all([listShotsByEpisode({ episodeId: episode.id }), stepIdsOfEpisode({ episodeId: episode.id })]);
+  const title = new Map(steps.map((s) => [s.id, s.title]));
+  const csv = Papa.unparse({
+    fields: ["kind", "description", "step", "framing", "camera_notes", "priority", "status"],
+    data: shots.map((s) => [s.kind, s.description, s.stepId ? (title.get(s.stepId) ?? "") : "", s.framing, s.cameraNotes, s.priority, s.status]),
+  });
+  return new Response(csv, { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="shot-list.csv"` } });
+});

@@ -1,0 +1,34 @@
+import { json, route, sessionUser } from "@/lib/server/api";
+import { loadStep } from "@/lib/server/loaders";
+import { assertCan } from "@/lib/server/access";
+import { createShots, listShotsByEpisode, toShotDto } from "@/db/queries/shots";
+import { COVERAGE_LABELS, type CoverageKind } from "@/lib/shot-kinds";
+import { AppError } from "@/lib/server/errors";
+import type { ShotKind } from "@/lib/schemas/footage";
+
+type P = { stepId: string };
+
+/** Creates one planned shot per coverage kind the build step asks for (skipping kinds it already has). */
+export const POST = route<P>(async (req, params) => {
+  const user = await sessionUser(req);
+  const { step, access } = await loadStep(user.id, params.stepId);
+  assertCan(access, "shots.edit");
+  if (step.coverageKinds.length === 0) throw new AppError("unprocessable:step.coverage", "This step has no planned coverage; tick how to cover it in the build plan first.");
+  const existing = (await listShotsByEpisode({ episodeId: step.episodeId })).filter((s) => s.stepId === step.id);
+  const missing = step.coverageKinds.filter((k) => !existing.some((s) => s.kind === k));
+  const rows = await createShots({
+    episodeId: step.episodeId,
+    rows: missing.map((k) => ({
+      kind: k as ShotKind,
+      description: `${COVERAGE_LABELS[k as CoverageKind] ?? k}: ${step.title}`,
+      framing: "",
+      cameraNotes: "",
+      priority: 2,
+      status: "planned" as const,
+      stepId: step.id,
+      segmentId: null,
+      shootDayId: null,
+    })),
+  });
+  return json({ shots: rows.map(toShotDto), skipped: step.coverageKinds.length - missing.length }, 201);
+});

@@ -1,0 +1,107 @@
+import "server-only";
+import { and, asc, eq, inArray } from "drizzle-orm";
+import { db } from "../client";
+import { buildSteps, episodes, gaps, scriptSegments, shots, type Shot } from "../schema";
+import type { ShotCreate, ShotUpdate, ShotStatus } from "../../lib/schemas/footage";
+
+export function toShotDto(s: Shot) {
+  return {
+    id: s.id,
+    kind: s.kind,
+    description: s.description,
+    framing: s.framing,
+    cameraNotes: s.cameraNotes,
+    priority: s.priority,
+    status: s.status,
+    stepId: s.stepId,
+    segmentId: s.segmentId,
+    shootDayId: s.shootDayId,
+    gapId: s.gapId,
+    position: s.position,
+  };
+}
+
+export async function listShotsByEpisode({ episodeId }: { episodeId: string }) {
+  return db().select().from(shots).where(eq(shots.episodeId, episodeId)).orderBy(asc(shots.position), asc(shots.createdAt));
+}
+
+export async function getShotById({ id }: { id: string }) {
+  const [row] = await db()
+    .select({ shot: shots, channelId: episodes.channelId })
+    .from(shots)
+    .innerJoin(episodes, eq(episodes.id, shots.episodeId))
+    .where(eq(shots.id, id))
+    .limit(1);
+  return row ?? null;
+}
+
+/** True when every given step/segment belongs to the episode. */
+export async function linksBelong({ episodeId, stepId, segmentId }: { episodeId: string; stepId?: string | null; segmentId?: string | null }) {
+  if (stepId) {
+    const [s] = await db().select({ id: buildSteps.id }).from(buildSteps).where(and(eq(buildSteps.id, stepId), eq(buildSteps.episodeId, episodeId)));
+    if (!s) return "stepId" as const;
+  }
+  if (segmentId) {
+    const [s] = await db().select({ id: scriptSegments.id }).from(scriptSegments).where(and(eq(scriptSegments.id, segmentId), eq(scriptSegments.episodeId, episodeId)));
+    if (!s) return "segmentId" as const;
+  }
+  return null;
+}
+
+export async function createShots({ episodeId, rows }: { episodeId: string; rows: (ShotCreate & { gapId?: string | null })[] }) {
+  return db().transaction(async (tx) => {
+    const existing = await tx.select({ id: shots.id }).from(shots).where(eq(shots.episodeId, episodeId));
+    if (!rows.length) return [];
+    return tx
+      .insert(shots)
+      .values(rows.map((r, i) => ({ ...r, episodeId, position: existing.length + i })))
+      .returning();
+  });
+}
+
+export async function updateShot({ id, episodeId, patch }: { id: string; episodeId: string; patch: ShotUpdate }) {
+  const [row] = await db().update(shots).set(patch).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
+  return row ?? null;
+}
+
+export async function deleteShot({ id, episodeId }: { id: string; episodeId: string }) {
+  const [row] = await db().delete(shots).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
+  return row ?? null;
+}
+
+/** Sets one status on many shots of one episode in one statement; ids of other episodes are not touched. */
+export async function setShotStatus({ episodeId, ids, status }: { episodeId: string; ids: string[]; status: ShotStatus }) {
+  return db().transaction(async (tx) => {
+    const found = await tx.select({ id: shots.id }).from(shots).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
+    if (found.length !== ids.length) return null;
+    await tx.update(shots).set({ status }).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
+    return found.length;
+  });
+}
+
+/** A pickup shot for a gap, linked to the gap and its segment, in one transaction with the gap row. */
+export async function createPickup({
+  episodeId,
+  gap,
+  description,
+  kind,
+}: {
+  episodeId: string;
+  gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: string | null; note?: string };
+  description: string;
+  kind: string;
+}) {
+  return db().transaction(async (tx) => {
+    let gapId = gap.id;
+    if (!gapId) {
+      const [g] = await tx
+        .insert(gaps)
+        .values({ episodeId, startFrame: gap.startFrame, endFrame: gap.endFrame, segmentId: gap.segmentId, source: "computed", reason: gap.reason, status: "open", note: gap.note ?? "" })
+        .returning();
+      gapId = g!.id;
+    }
+    const existing = await tx.select({ id: shots.id }).from(shots).where(eq(shots.episodeId, episodeId));
+    const [shot] = await tx.insert(shots).values({ episodeId, kind, description, status: "planned", priority: 1, segmentId: gap.segmentId, gapId, position: existing.length }).returning();
+    return { shot: shot!, gapId };
+  });
+}

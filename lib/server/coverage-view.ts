@@ -1,0 +1,58 @@
+import "server-only";
+import { computeCoverage, type ComputedGap } from "../coverage";
+import { formatTimecode, msToFrames, rateOf } from "../timecode";
+import type { Channel, CoverageRange, Episode, Gap } from "../../db/schema";
+import type { scriptView } from "./script-view";
+
+export interface GapView {
+  id: string | null;
+  key: string;
+  source: "computed" | "marked";
+  reason: string | null;
+  status: "open" | "resolved" | "dismissed";
+  startFrame: number;
+  endFrame: number;
+  startTimecode: string;
+  endTimecode: string;
+  segmentId: string | null;
+  note: string;
+}
+
+export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs" | "toCameraMaxMs">, view: ReturnType<typeof scriptView>, ranges: CoverageRange[], stored: Gap[]) {
+  const rate = rateOf(view.rate.id as Episode["frameRate"], view.rate.dropFrame);
+  const thresholds = { voiceOverGapFrames: msToFrames(channel.brollGapMs, rate), toCameraMaxFrames: msToFrames(channel.toCameraMaxMs, rate) };
+  const segments = view.segments.map((s) => ({ id: s.id, kind: s.kind, start: s.timing.start, end: s.timing.end }));
+  const report = computeCoverage(segments, ranges.map((r) => ({ start: r.startFrame, end: r.endFrame })), thresholds);
+  const tc = (f: number) => formatTimecode(f, rate);
+  const same = (g: Gap, c: ComputedGap) => g.source === "computed" && g.startFrame === c.start && g.endFrame === c.end;
+  const computed: GapView[] = report.gaps.map((c) => {
+    const keep = stored.find((g) => same(g, c));
+    return {
+      id: keep?.id ?? null,
+      key: keep?.id ?? `computed:${c.start}-${c.end}`,
+      source: "computed",
+      reason: c.reason,
+      status: (keep?.status as GapView["status"]) ?? "open",
+      startFrame: c.start,
+      endFrame: c.end,
+      startTimecode: tc(c.start),
+      endTimecode: tc(c.end),
+      segmentId: c.segmentId,
+      note: keep?.note ?? "",
+    };
+  });
+  const marked: GapView[] = stored
+    .filter((g) => g.source === "marked")
+    .map((g) => ({ id: g.id, key: g.id, source: "marked", reason: null, status: g.status as GapView["status"], startFrame: g.startFrame, endFrame: g.endFrame, startTimecode: tc(g.startFrame), endTimecode: tc(g.endFrame), segmentId: g.segmentId, note: g.note }));
+  const gaps = [...computed, ...marked].sort((a, b) => a.startFrame - b.startFrame);
+  return {
+    thresholds,
+    gaps,
+    openGaps: gaps.filter((g) => g.status === "open").length,
+    voiceOverFrames: report.voiceOverFrames,
+    coveredVoiceOverFrames: report.coveredVoiceOverFrames,
+    coverage: report.coverage,
+    stillComputed: (g: Gap) => report.gaps.some((c) => same(g, c)),
+    ranges: ranges.map((r) => ({ id: r.id, clipId: r.clipId, clipInFrame: r.clipInFrame, startFrame: r.startFrame, endFrame: r.endFrame, startTimecode: tc(r.startFrame), endTimecode: tc(r.endFrame), note: r.note })),
+  };
+}
