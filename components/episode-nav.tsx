@@ -9,9 +9,12 @@ export function EpisodeNav({ base }: { base: string }) {
     { href: `${base}/plan`, label: "Build plan" },
     { href: `${base}/cut-list`, label: "Cut list" },
     { href: `${base}/script`, label: "Script" },
+    { href: `${base}/shots`, label: "Shot list" },
+    { href: `${base}/footage`, label: "Footage" },
+    { href: `${base}/coverage`, label: "B-roll coverage" },
   ];
   return (
-    <nav aria-label="Episode" className="flex gap-1 border-b border-timber-300">
+    <nav aria-label="Episode" className="flex flex-wrap gap-1 border-b border-timber-300">
       {items.map((i) => {
         const current = i.href === base ? path === base : path.startsWith(i.href);
         return (

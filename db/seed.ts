@@ -4,6 +4,7 @@
  * Runs once, on an empty database.
  */
 import bcrypt from "bcryptjs";
+import crypto from "node:crypto";
 import { sql } from "drizzle-orm";
 import type { NodePgDatabase } from "drizzle-orm/node-postgres";
 import * as schema from "./schema";
@@ -37,7 +38,12 @@ const EPISODES: { title: string; stage: Stage; summary: string; target: number; 
   { title: "Plywood box for drill bits", stage: "published", summary: "Bandsaw box with sized holes; a quick weekend build.", target: 480, publish: "2026-10-23" },
 ];
 
-export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<boolean> {
+export interface SeedOptions {
+  /** Stores a demo clip's bytes; without it the demo has no footage. */
+  putObject?: (key: string, bytes: Uint8Array, contentType: string) => Promise<string | null>;
+}
+
+export async function seedDemo(db: NodePgDatabase<typeof schema>, opts: SeedOptions = {}): Promise<boolean> {
   const existing = await db.execute(sql`select count(*)::int as n from channels`);
   if ((existing.rows[0] as { n: number }).n > 0) return false;
 
@@ -78,6 +84,7 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<boole
     }
     const stepIds = await seedBuildPlans(tx, channel.id, episodeIds);
     await seedScripts(tx, episodeIds, stepIds, ids["presenter@jigboard.example"]!);
+    await seedShotsAndFootage(tx, channel.id, episodeIds, stepIds, ids["editor@jigboard.example"]!, opts);
     await tx.insert(schema.episodes).values({
       channelId: outsiderChannel.id,
       title: "Hall bench in steamed beech",
@@ -322,4 +329,43 @@ async function seedScripts(tx: SeedTx, episodeIds: Record<string, string>, stepI
     ["voice_over", "bridles", "Each bridle joint starts on the table saw with a tenoning jig and finishes with a chisel, paring to a knife line.", { chapter: "Bridle joints" }],
     ["voice_over", "oil", "Three coats of hardwax oil, a day between each. The rags go flat on the concrete outside to dry. Oily rags can catch fire all on their own.", { chapter: "Oil finish" }],
   ]);
+}
+
+/** Shots in every status, generated test-pattern clips (made with ffmpeg for the demo) and a few open gaps. */
+async function seedShotsAndFootage(tx: SeedTx, channelId: string, episodeIds: Record<string, string>, stepIds: Record<string, Record<string, string>>, editorId: string, opts: SeedOptions) {
+  const title = "Outdoor bench from reclaimed decking";
+  const episodeId = episodeIds[title]!;
+  const steps = stepIds[title]!;
+  const shotRows = [
+    { kind: "broll", description: "Screws coming out of the old boards, close", stepId: steps.strip, status: "selected", priority: 1, framing: "tight, handheld" },
+    { kind: "slow_motion", description: "First planer pass: shavings flying", stepId: steps.strip, status: "captured", priority: 1, framing: "side, low", cameraNotes: "120 fps, 50 mm" },
+    { kind: "time_lapse", description: "Seat glue-up clamped overnight", stepId: steps.seat, status: "captured", priority: 2, framing: "overhead" },
+    { kind: "close_up", description: "The cupped panel on the bench with a straightedge", stepId: steps.seat, status: "rejected", priority: 1, framing: "eye level", cameraNotes: "reshoot: straightedge out of focus" },
+    { kind: "broll", description: "Strips drying in front of the fan, moisture meter reading", stepId: steps.rejoin, status: "planned", priority: 1 },
+    { kind: "overhead", description: "Battens screwed on through slotted holes", stepId: steps.battens, status: "planned", priority: 2 },
+    { kind: "to_camera", description: "Closing lines beside the finished bench", stepId: steps.assemble, status: "planned", priority: 1 },
+  ];
+  const shotIds: string[] = [];
+  for (const [position, r] of shotRows.entries()) {
+    const [row] = await tx.insert(schema.shots).values({ ...r, episodeId, position }).returning();
+    shotIds.push(row!.id);
+  }
+  if (opts.putObject) {
+    const fs = await import("node:fs");
+    const path = await import("node:path");
+    const { fileURLToPath } = await import("node:url");
+    const bytes = fs.readFileSync(path.join(path.dirname(fileURLToPath(import.meta.url)), "demo-media", "test-pattern.mp4"));
+    const names = ["A001_screws_out.mp4", "A002_planer_shavings.mp4", "A003_glueup_timelapse.mp4"];
+    for (const [i, name] of names.entries()) {
+      const key = `channel/${channelId}/footage/${crypto.randomUUID()}.mp4`;
+      const etag = await opts.putObject(key, bytes, "video/mp4");
+      const [clip] = await tx
+        .insert(schema.clips)
+        .values({ channelId, episodeId, shotId: shotIds[i]!, storageKey: key, state: "stored", originalName: name, sizeBytes: bytes.length, contentType: "video/mp4", durationMs: 4000, frameRate: "29.970", width: 320, height: 180, startTimecode: "01:00:00;00", checksum: etag ? `s3-etag:${etag}` : null, createdBy: editorId })
+        .returning();
+      // Lay the first two over the opening voice-over; leave later narration uncovered.
+      if (i < 2) await tx.insert(schema.coverageRanges).values({ episodeId, clipId: clip!.id, startFrame: Math.round((17 + i * 4) * 29.97), endFrame: Math.round((21 + i * 4) * 29.97) });
+    }
+  }
+  await tx.insert(schema.gaps).values({ episodeId, source: "marked", status: "open", startFrame: Math.round(200 * 29.97), endFrame: Math.round(206 * 29.97), note: "Need a wide of the whole bench before assembly" });
 }

@@ -10,7 +10,7 @@ import path from "node:path";
 import crypto from "node:crypto";
 import { drizzle } from "drizzle-orm/node-postgres";
 import pg from "pg";
-import { startLocalServices } from "../lib/server/local-services";
+import { demoPutObject, startLocalServices } from "../lib/server/local-services";
 import { seedDemo } from "../db/seed";
 import * as schema from "../db/schema";
 import { buildIsStale } from "../lib/server/build-check";
@@ -86,7 +86,7 @@ async function main() {
 
   try {
     const pool = new pg.Pool({ connectionString: services.env.DATABASE_URL });
-    await seedDemo(drizzle(pool, { schema }));
+    await seedDemo(drizzle(pool, { schema }), { putObject: await demoPutObject(services.env) });
     await pool.end();
 
     const env: NodeJS.ProcessEnv = {

@@ -124,13 +124,13 @@ export function EpisodeCard({
           <dl className="mt-1.5 grid grid-cols-4 divide-x divide-timber-200 rounded-plank border border-timber-200 text-center">
             {[
               ["Script", scriptTitle(episode), scriptFigure(episode)],
-              ["Shots", "Shots captured of planned", "—"],
-              ["Gaps", "Open B-roll gaps", "—"],
+              ["Shots", "Shots captured of planned", episode.shotsTotal ? `${episode.shotsDone}/${episode.shotsTotal}` : "—"],
+              ["Gaps", "Open B-roll gaps", episode.openGaps == null ? "—" : String(episode.openGaps)],
               ["Sponsor", "Sponsor sign-off", "—"],
             ].map(([label, title, value]) => (
               <div key={label} title={title} className="px-0.5 py-0.5">
                 <dt className="text-[10px] uppercase tracking-wide text-walnut-600">{label}</dt>
-                <dd className="num text-xs" data-testid={label === "Script" ? "card-script" : undefined}>
+                <dd className="num text-xs" data-testid={`card-${String(label).toLowerCase()}`}>
                   {value}
                 </dd>
               </div>

@@ -105,3 +105,18 @@ export async function createPickup({
     return { shot: shot!, gapId };
   });
 }
+
+/** Shots captured or better, and all shots not rejected, per episode. */
+export async function countShotsByEpisodes({ episodeIds }: { episodeIds: string[] }) {
+  const out = new Map<string, { done: number; total: number }>();
+  if (!episodeIds.length) return out;
+  const rows = await db().select({ episodeId: shots.episodeId, status: shots.status }).from(shots).where(inArray(shots.episodeId, episodeIds));
+  for (const r of rows) {
+    if (r.status === "rejected") continue;
+    const c = out.get(r.episodeId) ?? { done: 0, total: 0 };
+    c.total += 1;
+    if (r.status === "captured" || r.status === "selected") c.done += 1;
+    out.set(r.episodeId, c);
+  }
+  return out;
+}

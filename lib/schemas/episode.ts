@@ -96,6 +96,10 @@ export const episodeSchema = z
     archivedAt: z.string().nullable(),
     /** Estimated script runtime (board list only). */
     scriptSeconds: z.number().nullable().optional(),
+    /** Open B-roll gaps (board list only; null without a script). */
+    openGaps: z.number().nullable().optional(),
+    shotsDone: z.number().optional(),
+    shotsTotal: z.number().optional(),
   })
   .meta({ id: "Episode" });
 export type EpisodeDto = z.infer<typeof episodeSchema>;

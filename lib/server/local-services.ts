@@ -98,3 +98,21 @@ export function authSecret(dataRoot: string): string {
   fs.writeFileSync(file, secret, { mode: 0o600 });
   return secret;
 }
+
+/** A putObject for the demo seed, talking to whichever store the services use. */
+export async function demoPutObject(env: Record<string, string>) {
+  const { S3Client, PutObjectCommand } = await import("@aws-sdk/client-s3");
+  const client = new S3Client({
+    endpoint: env.S3_ENDPOINT ?? process.env.S3_ENDPOINT,
+    region: process.env.S3_REGION ?? "us-east-1",
+    forcePathStyle: true,
+    credentials: { accessKeyId: env.S3_ACCESS_KEY_ID ?? process.env.S3_ACCESS_KEY_ID ?? "S3RVER", secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? process.env.S3_SECRET_ACCESS_KEY ?? "S3RVER" },
+    requestChecksumCalculation: "WHEN_REQUIRED",
+    responseChecksumValidation: "WHEN_REQUIRED",
+  });
+  const bucket = env.S3_BUCKET ?? process.env.S3_BUCKET ?? "jigboard-media";
+  return async (key: string, bytes: Uint8Array, contentType: string) => {
+    const r = await client.send(new PutObjectCommand({ Bucket: bucket, Key: key, Body: bytes, ContentType: contentType }));
+    return r.ETag?.replace(/"/g, "") ?? null;
+  };
+}

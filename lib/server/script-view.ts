@@ -53,22 +53,3 @@ export async function scriptViewFor(episode: Episode, override?: { rate?: FrameR
   const [segments, wpm] = await Promise.all([listSegmentsByEpisode({ episodeId: episode.id }), presenterWpm(episode)]);
   return scriptView(episode, segments, wpm, override);
 }
-
-/** Estimated script runtime in seconds for each episode on the board (null when it has no script). */
-export async function scriptRuntimes(episodes: Episode[]): Promise<Map<string, number | null>> {
-  const { listSegmentsByEpisodes } = await import("../../db/queries/script");
-  const segments = await listSegmentsByEpisodes({ episodeIds: episodes.map((e) => e.id) });
-  const rates = new Map<string, number>();
-  for (const e of episodes) if (e.presenterId && !rates.has(e.presenterId)) rates.set(e.presenterId, await presenterWpm(e));
-  const out = new Map<string, number | null>();
-  for (const e of episodes) {
-    const mine = segments.filter((s) => s.episodeId === e.id);
-    if (!mine.length) {
-      out.set(e.id, null);
-      continue;
-    }
-    const v = scriptView(e, mine, e.presenterId ? (rates.get(e.presenterId) ?? DEFAULT_WPM) : DEFAULT_WPM);
-    out.set(e.id, Math.round(v.totals.seconds));
-  }
-  return out;
-}

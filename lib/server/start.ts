@@ -7,7 +7,7 @@ import { spawn, spawnSync } from "node:child_process";
 import path from "node:path";
 import { drizzle } from "drizzle-orm/node-postgres";
 import pg from "pg";
-import { authSecret, startLocalServices } from "./local-services";
+import { authSecret, demoPutObject, startLocalServices } from "./local-services";
 import { buildIsStale } from "./build-check";
 import { LOCAL_PORTS } from "../env";
 import { seedDemo } from "../../db/seed";
@@ -42,7 +42,7 @@ async function main() {
   const seedWanted = process.env.SEED_DEMO ? /^(1|true|yes)$/i.test(process.env.SEED_DEMO) : services.localDatabase;
   if (seedWanted) {
     const pool = new pg.Pool({ connectionString: services.env.DATABASE_URL });
-    const seeded = await seedDemo(drizzle(pool, { schema }));
+    const seeded = await seedDemo(drizzle(pool, { schema }), { putObject: await demoPutObject(services.env) });
     await pool.end();
     console.log(seeded ? "[seed] demo scenario created" : "[seed] data present, demo not re-seeded");
   }

@@ -3,7 +3,7 @@ import { requireChannel } from "@/lib/server/access";
 import { episodeCreateSchema, episodeListQuerySchema } from "@/lib/schemas/episode";
 import { createEpisode, listEpisodesByChannel, toEpisodeDto } from "@/db/queries/episodes";
 import { recordAudit } from "@/db/queries/audit";
-import { scriptRuntimes } from "@/lib/server/script-view";
+import { boardFigures } from "@/lib/server/board-figures";
 
 type P = { channelId: string };
 
@@ -13,8 +13,8 @@ export const GET = route<P>(async (req, params) => {
   const channelId = parseId(params.channelId, "channel");
   await requireChannel(user.id, channelId, "channel.read");
   const rows = await listEpisodesByChannel({ channelId, stage: query.stage, month: query.month, archived: query.archived === "true" });
-  const runtimes = await scriptRuntimes(rows);
-  return json({ episodes: rows.map((e) => ({ ...toEpisodeDto(e), scriptSeconds: runtimes.get(e.id) ?? null })) });
+  const figures = await boardFigures(rows);
+  return json({ episodes: rows.map((e) => ({ ...toEpisodeDto(e), ...figures.get(e.id) })) });
 });
 
 export const POST = route<P>(async (req, params) => {

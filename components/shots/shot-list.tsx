@@ -1,0 +1,273 @@
+"use client";
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type RowSelectionState, type SortingState } from "@tanstack/react-table";
+import { SHOT_KINDS, SHOT_KIND_LABELS, SHOT_STATUSES, SHOT_STATUS_LABELS, type ShotKind, type ShotStatus } from "@/lib/schemas/footage";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/field";
+
+interface Shot {
+  id: string;
+  kind: ShotKind;
+  description: string;
+  framing: string;
+  cameraNotes: string;
+  priority: number;
+  status: ShotStatus;
+  stepId: string | null;
+  segmentId: string | null;
+  gapId: string | null;
+}
+
+async function send(url: string, method: string, body?: unknown) {
+  const r = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  const data = await r.json().catch(() => ({}));
+  if (!r.ok) throw Object.assign(new Error(data?.error?.message ?? "Request failed"), { fields: data?.error?.fields });
+  return data;
+}
+
+function Cell({ value, canEdit, label, onSave }: { value: string; canEdit: boolean; label: string; onSave: (v: string) => Promise<void> }) {
+  const [editing, setEditing] = useState(false);
+  const [draft, setDraft] = useState(value);
+  if (!canEdit) return <>{value || "—"}</>;
+  if (!editing)
+    return (
+      <button type="button" className="w-full rounded-plank px-1 text-left hover:bg-timber-100" aria-label={`Edit ${label}`} onClick={() => (setDraft(value), setEditing(true))}>
+        {value || <span className="text-walnut-500">—</span>}
+      </button>
+    );
+  const done = async () => {
+    setEditing(false);
+    if (draft !== value) await onSave(draft);
+  };
+  return <input autoFocus aria-label={label} className="w-full rounded-plank border border-chalk-600 px-1" value={draft} onChange={(e) => setDraft(e.target.value)} onBlur={done} onKeyDown={(e) => (e.key === "Enter" ? void done() : e.key === "Escape" ? setEditing(false) : undefined)} />;
+}
+
+const col = createColumnHelper<Shot>();
+
+export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: string; base: string; canEdit: boolean; steps: { id: string; title: string; coverageKinds: string[] }[] }) {
+  const qc = useQueryClient();
+  const key = useMemo(() => ["shots", episodeId], [episodeId]);
+  const { data } = useQuery({ queryKey: key, queryFn: () => send(`/api/episodes/${episodeId}/shots`, "GET") as Promise<{ shots: Shot[] }> });
+  const [sorting, setSorting] = useState<SortingState>([]);
+  const [selection, setSelection] = useState<RowSelectionState>({});
+  const [statusFilter, setStatusFilter] = useState("");
+  const [text, setText] = useState("");
+  const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
+  const [planStep, setPlanStep] = useState("");
+  const [newShot, setNewShot] = useState({ kind: "broll", description: "", stepId: "" });
+  const refresh = () => qc.invalidateQueries({ queryKey: key });
+  const stepTitle = new Map(steps.map((s) => [s.id, s.title]));
+  const patch = async (id: string, body: Record<string, unknown>) => {
+    try {
+      await send(`/api/shots/${id}`, "PATCH", body);
+      await refresh();
+    } catch (e) {
+      setMessage({ tone: "error", text: (e as Error).message });
+    }
+  };
+
+  const rows = (data?.shots ?? []).filter((s) => (!statusFilter || s.status === statusFilter) && (!text || `${s.description} ${s.framing} ${s.cameraNotes}`.toLowerCase().includes(text.toLowerCase())));
+  const columns = [
+    col.display({
+      id: "select",
+      header: ({ table }) => <input type="checkbox" aria-label="Select all shots" className="accent-chalk-600" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />,
+      cell: ({ row }) => <input type="checkbox" aria-label={`Select ${row.original.description}`} className="accent-chalk-600" checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />,
+    }),
+    col.accessor("priority", { header: "Pri", cell: (c) => <Cell canEdit={canEdit} label={`priority of ${c.row.original.description}`} value={String(c.getValue())} onSave={(v) => patch(c.row.original.id, { priority: Number(v) })} /> }),
+    col.accessor("kind", {
+      header: "Kind",
+      cell: (c) =>
+        canEdit ? (
+          <select aria-label={`Kind of ${c.row.original.description}`} className="rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { kind: e.target.value })}>
+            {SHOT_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {SHOT_KIND_LABELS[k]}
+              </option>
+            ))}
+          </select>
+        ) : (
+          SHOT_KIND_LABELS[c.getValue()]
+        ),
+    }),
+    col.accessor("description", { header: "What it shows", cell: (c) => <Cell canEdit={canEdit} label={`description of ${c.getValue()}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { description: v })} /> }),
+    col.accessor((s) => (s.stepId ? (stepTitle.get(s.stepId) ?? "") : ""), { id: "step", header: "Build step" }),
+    col.accessor("framing", { header: "Framing", cell: (c) => <Cell canEdit={canEdit} label={`framing of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { framing: v })} /> }),
+    col.accessor("cameraNotes", { header: "Camera and lens", cell: (c) => <Cell canEdit={canEdit} label={`camera notes of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { cameraNotes: v })} /> }),
+    col.accessor("status", {
+      header: "Status",
+      cell: (c) =>
+        canEdit ? (
+          <select aria-label={`Status of ${c.row.original.description}`} className="rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { status: e.target.value })}>
+            {SHOT_STATUSES.map((s) => (
+              <option key={s} value={s}>
+                {SHOT_STATUS_LABELS[s]}
+              </option>
+            ))}
+          </select>
+        ) : (
+          SHOT_STATUS_LABELS[c.getValue()]
+        ),
+    }),
+    col.display({ id: "gap", header: "From gap", cell: (c) => (c.row.original.gapId ? "yes" : "") }),
+  ];
+  const table = useReactTable({ data: rows, columns, state: { sorting, rowSelection: selection }, getRowId: (r) => r.id, enableRowSelection: canEdit, onRowSelectionChange: setSelection, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(), getFilteredRowModel: getFilteredRowModel() });
+  const selected = Object.keys(selection).filter((k) => selection[k]);
+
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-end gap-3 text-sm">
+        <label>
+          <span className="block text-walnut-700">Status</span>
+          <select className="rounded-plank border border-timber-300 bg-white px-1 py-1" value={statusFilter} onChange={(e) => setStatusFilter(e.target.value)}>
+            <option value="">Any</option>
+            {SHOT_STATUSES.map((s) => (
+              <option key={s} value={s}>
+                {SHOT_STATUS_LABELS[s]}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label>
+          <span className="block text-walnut-700">Find</span>
+          <input className="rounded-plank border border-timber-300 px-1 py-1" value={text} onChange={(e) => setText(e.target.value)} placeholder="description, framing…" />
+        </label>
+        <a className="rounded-plank border border-timber-300 bg-white px-3 py-1 hover:bg-timber-100" href={`/api/episodes/${episodeId}/shots/csv`}>
+          Export CSV
+        </a>
+        <Link className="rounded-plank border border-timber-300 bg-white px-3 py-1 hover:bg-timber-100" href={`${base}/shots/print`}>
+          Print by build step
+        </Link>
+        {canEdit && selected.length ? (
+          <span className="flex items-center gap-1" data-testid="bulk">
+            {selected.length} selected: set
+            {SHOT_STATUSES.map((s) => (
+              <Button
+                key={s}
+                onClick={async () => {
+                  try {
+                    await send(`/api/episodes/${episodeId}/shots/bulk`, "POST", { ids: selected, status: s });
+                    setSelection({});
+                    setMessage({ tone: "ok", text: `${selected.length} shots set to ${SHOT_STATUS_LABELS[s]}.` });
+                    await refresh();
+                  } catch (e) {
+                    setMessage({ tone: "error", text: (e as Error).message });
+                  }
+                }}
+              >
+                {SHOT_STATUS_LABELS[s]}
+              </Button>
+            ))}
+          </span>
+        ) : null}
+      </div>
+      {message ? <Notice tone={message.tone}>{message.text}</Notice> : null}
+      {data && data.shots.length === 0 ? (
+        <div className="rounded-plank border border-dashed border-timber-400 bg-white p-4 text-sm" data-testid="shots-empty">
+          <strong>No shots planned yet.</strong> {canEdit ? "Create the shots a build step needs from its planned coverage below, or add one by hand." : "The team plans the shots."}
+        </div>
+      ) : null}
+      {rows.length ? (
+        <div className="overflow-x-auto rounded-plank border border-timber-300 bg-white">
+          <table className="w-full border-collapse text-sm" data-testid="shot-table">
+            <thead>
+              {table.getHeaderGroups().map((hg) => (
+                <tr key={hg.id} className="border-b border-timber-300 bg-timber-100 text-left">
+                  {hg.headers.map((h) => (
+                    <th key={h.id} className="px-2 py-1.5 font-medium">
+                      {h.column.getCanSort() ? (
+                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex items-center gap-1">
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          <span aria-hidden className="text-xs">{h.column.getIsSorted() === "asc" ? "▲" : h.column.getIsSorted() === "desc" ? "▼" : "↕"}</span>
+                        </button>
+                      ) : (
+                        flexRender(h.column.columnDef.header, h.getContext())
+                      )}
+                    </th>
+                  ))}
+                </tr>
+              ))}
+            </thead>
+            <tbody>
+              {table.getRowModel().rows.map((r) => (
+                <tr key={r.id} className="border-b border-timber-200 align-top" data-testid="shot-row" data-status={r.original.status}>
+                  {r.getVisibleCells().map((c) => (
+                    <td key={c.id} className="px-2 py-1">
+                      {flexRender(c.column.columnDef.cell, c.getContext())}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+      {canEdit ? (
+        <div className="grid gap-3 md:grid-cols-2">
+          <div className="flex flex-wrap items-end gap-2 rounded-plank border border-timber-300 bg-white p-3 text-sm">
+            <label>
+              <span className="block text-walnut-700">Planned coverage of step</span>
+              <select className="rounded-plank border border-timber-300 px-1 py-1" value={planStep} onChange={(e) => setPlanStep(e.target.value)}>
+                <option value="">Choose a build step</option>
+                {steps.map((s) => (
+                  <option key={s.id} value={s.id} disabled={!s.coverageKinds.length}>
+                    {s.title} {s.coverageKinds.length ? `(${s.coverageKinds.length})` : "(none planned)"}
+                  </option>
+                ))}
+              </select>
+            </label>
+            <Button
+              disabled={!planStep}
+              onClick={async () => {
+                try {
+                  const r = await send(`/api/steps/${planStep}/planned-shots`, "POST");
+                  setMessage({ tone: "ok", text: `${r.shots.length} shots added${r.skipped ? `, ${r.skipped} already on the list` : ""}.` });
+                  await refresh();
+                } catch (e) {
+                  setMessage({ tone: "error", text: (e as Error).message });
+                }
+              }}
+            >
+              Add its shots
+            </Button>
+          </div>
+          <form
+            className="flex flex-wrap items-end gap-2 rounded-plank border border-timber-300 bg-white p-3 text-sm"
+            aria-label="Add a shot"
+            onSubmit={async (e) => {
+              e.preventDefault();
+              try {
+                await send(`/api/episodes/${episodeId}/shots`, "POST", { kind: newShot.kind, description: newShot.description, stepId: newShot.stepId || null });
+                setNewShot({ ...newShot, description: "" });
+                await refresh();
+              } catch (err) {
+                setMessage({ tone: "error", text: (err as Error).message });
+              }
+            }}
+          >
+            <select aria-label="Kind" className="rounded-plank border border-timber-300 px-1 py-1" value={newShot.kind} onChange={(e) => setNewShot({ ...newShot, kind: e.target.value })}>
+              {SHOT_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {SHOT_KIND_LABELS[k]}
+                </option>
+              ))}
+            </select>
+            <input aria-label="What it shows" placeholder="What the shot shows" className="min-w-48 flex-1 rounded-plank border border-timber-300 px-1 py-1" value={newShot.description} onChange={(e) => setNewShot({ ...newShot, description: e.target.value })} />
+            <select aria-label="Build step" className="rounded-plank border border-timber-300 px-1 py-1" value={newShot.stepId} onChange={(e) => setNewShot({ ...newShot, stepId: e.target.value })}>
+              <option value="">No step</option>
+              {steps.map((s) => (
+                <option key={s.id} value={s.id}>
+                  {s.title}
+                </option>
+              ))}
+            </select>
+            <Button type="submit" variant="primary">
+              Add shot
+            </Button>
+          </form>
+        </div>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,43 @@
+import "server-only";
+import { scriptView, presenterWpm } from "./script-view";
+import { coverageOf } from "./coverage-view";
+import type { Episode } from "../../db/schema";
+import { listSegmentsByEpisodes } from "../../db/queries/script";
+import { listGapsByEpisodes, listRangesByEpisodes } from "../../db/queries/coverage";
+import { getChannelById } from "../../db/queries/channels";
+import { countShotsByEpisodes } from "../../db/queries/shots";
+
+export interface BoardFigures {
+  scriptSeconds: number | null;
+  openGaps: number | null;
+  shotsDone: number;
+  shotsTotal: number;
+}
+
+/** The progress figures each board card shows, for all episodes of one channel at once. */
+export async function boardFigures(episodes: Episode[]): Promise<Map<string, BoardFigures>> {
+  const out = new Map<string, BoardFigures>();
+  if (!episodes.length) return out;
+  const ids = episodes.map((e) => e.id);
+  const [segments, ranges, gaps, channel, shots] = await Promise.all([
+    listSegmentsByEpisodes({ episodeIds: ids }),
+    listRangesByEpisodes({ episodeIds: ids }),
+    listGapsByEpisodes({ episodeIds: ids }),
+    getChannelById({ id: episodes[0]!.channelId }),
+    countShotsByEpisodes({ episodeIds: ids }),
+  ]);
+  const wpm = new Map<string, number>();
+  for (const e of episodes) if (e.presenterId && !wpm.has(e.presenterId)) wpm.set(e.presenterId, await presenterWpm(e));
+  for (const e of episodes) {
+    const mine = segments.filter((s) => s.episodeId === e.id);
+    const s = shots.get(e.id) ?? { done: 0, total: 0 };
+    if (!mine.length) {
+      out.set(e.id, { scriptSeconds: null, openGaps: null, shotsDone: s.done, shotsTotal: s.total });
+      continue;
+    }
+    const view = scriptView(e, mine, e.presenterId ? (wpm.get(e.presenterId) ?? 150) : 150);
+    const cov = coverageOf(e, channel!, view, ranges.filter((r) => r.episodeId === e.id), gaps.filter((g) => g.episodeId === e.id));
+    out.set(e.id, { scriptSeconds: Math.round(view.totals.seconds), openGaps: cov.openGaps, shotsDone: s.done, shotsTotal: s.total });
+  }
+  return out;
+}
