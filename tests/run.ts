@@ -97,6 +97,8 @@ async function main() {
       JIGBOARD_TEST_URL: `http://127.0.0.1:${appPort}`,
       NEXT_TELEMETRY_DISABLED: "1",
       SIGN_IN_MAX_FAILURES: "5",
+      // Small parts so the browser tests see several parts on a small file.
+      UPLOAD_PART_BYTES: String(5 * 1024 * 1024),
     };
     const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
 

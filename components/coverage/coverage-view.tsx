@@ -56,7 +56,7 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
       {ticks.map((t) => (
         <g key={t}>
           <line x1={x(t)} x2={x(t)} y1={14} y2={145} stroke="#e8d9bd" />
-          <text x={x(t)} y={11} fontSize="9" textAnchor="middle" fill="#6b5442" fontFamily="JetBrains Mono, monospace">
+          <text x={Math.min(x(t), W - 24)} y={11} fontSize="9" textAnchor="middle" fill="#6b5442" fontFamily="JetBrains Mono, monospace">
             {formatTimecode(t, rate).slice(3, 8)}
           </text>
         </g>
@@ -242,7 +242,7 @@ export function CoverageView({ episodeId, canManage, canShots, clips }: { episod
                 {canManage && g.status === "open" ? (
                   <span className="ml-auto flex gap-1">
                     {canShots ? (
-                      <Button onClick={() => void act(() => send(`/api/episodes/${episodeId}/pickups`, "POST", g.id ? { gapId: g.id } : body), "Pickup shot added to the shot list.")}>Pickup shot</Button>
+                      <Button onClick={() => void act(() => send(`/api/episodes/${episodeId}/pickups`, "POST", g.id ? { gapId: g.id } : { startFrame: g.startFrame, endFrame: g.endFrame, segmentId: g.segmentId, reason: g.reason }), "Pickup shot added to the shot list.")}>Pickup shot</Button>
                     ) : null}
                     <Button variant="quiet" onClick={() => void setStatus("resolved")}>
                       Resolve
