@@ -16,12 +16,45 @@ export interface MediaMeta {
 
 type Track = Record<string, unknown> & { "@type": string };
 
+/** MediaInfo finds container headers near the start or the end; it never needs the whole file. */
+const READ_BUDGET_BYTES = 4 * 1024 * 1024;
+/** MediaInfo asks for small chunks; fetch whole blocks so one ranged GET serves many of them. */
+const BLOCK = 256 * 1024;
+
 const num = (v: unknown) => (v == null || v === "" || Number.isNaN(Number(v)) ? null : Number(v));
 
 export async function readMediaMeta(key: string, size: number): Promise<MediaMeta> {
   const mi = await mediaInfoFactory({ format: "object" });
+  let budget = READ_BUDGET_BYTES;
+  const blocks = new Map<number, Uint8Array>();
+  const block = async (i: number) => {
+    let b = blocks.get(i);
+    if (!b) {
+      b = await readRange(key, i * BLOCK, Math.min(BLOCK, size - i * BLOCK));
+      budget -= b.length;
+      if (blocks.size > 8) blocks.delete(blocks.keys().next().value!);
+      blocks.set(i, b);
+    }
+    return b;
+  };
   try {
-    const result = (await mi.analyzeData(size, (chunkSize: number, offset: number) => readRange(key, offset, Math.min(chunkSize, size - offset)))) as unknown as {
+    const result = (await mi.analyzeData(size, async (chunkSize: number, offset: number) => {
+      // An unknown format would make MediaInfo scan everything; an empty chunk ends the analysis.
+      const n = Math.min(chunkSize, size - offset);
+      if (n <= 0 || budget <= 0) return new Uint8Array();
+      const out = new Uint8Array(n);
+      let filled = 0;
+      while (filled < n) {
+        const at = offset + filled;
+        const b = await block(Math.floor(at / BLOCK));
+        const from = at % BLOCK;
+        const take = Math.min(n - filled, b.length - from);
+        if (take <= 0) break;
+        out.set(b.subarray(from, from + take), filled);
+        filled += take;
+      }
+      return out.subarray(0, filled);
+    })) as unknown as {
       media?: { track?: Track[] };
     };
     const tracks = result.media?.track ?? [];

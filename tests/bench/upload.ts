@@ -1,0 +1,136 @@
+/**
+ * Upload benchmark: the same file sent through Jigboard's flow (the app signs,
+ * the client PUTs parts straight to storage) and through the AWS SDK's plain
+ * multipart calls, to the same local store in the same run. Reports the
+ * throughput ratio and the app server's peak RSS growth while the file moves.
+ * BENCH_UPLOAD_BYTES overrides the 2 GiB default.
+ */
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import fs from "node:fs";
+import path from "node:path";
+import crypto from "node:crypto";
+import { drizzle } from "drizzle-orm/node-postgres";
+import pg from "pg";
+import { encode } from "next-auth/jwt";
+import { S3Client, CreateMultipartUploadCommand, UploadPartCommand, CompleteMultipartUploadCommand, DeleteObjectCommand } from "@aws-sdk/client-s3";
+import { startLocalServices } from "../../lib/server/local-services";
+import { buildIsStale } from "../../lib/server/build-check";
+import * as schema from "../../db/schema";
+
+const SIZE = Number(process.env.BENCH_UPLOAD_BYTES ?? 2 * 1024 ** 3);
+const PART = 16 * 1024 * 1024;
+const CONCURRENCY = 4;
+const PORT = 3300;
+const root = process.cwd();
+
+function rssKiB(pid: number): number {
+  try {
+    const m = /VmRSS:\s+(\d+)/.exec(fs.readFileSync(`/proc/${pid}/status`, "utf8"));
+    return m ? Number(m[1]) : 0;
+  } catch {
+    return 0;
+  }
+}
+
+async function pool<T>(items: T[], n: number, fn: (t: T) => Promise<void>) {
+  const queue = [...items];
+  await Promise.all(Array.from({ length: n }, async () => {
+    while (queue.length) await fn(queue.shift()!);
+  }));
+}
+
+export async function uploadBench() {
+  for (const k of ["DATABASE_URL", "S3_ENDPOINT", "SMTP_URL"]) delete process.env[k];
+  const dataRoot = path.join(root, ".test-data", "bench");
+  fs.rmSync(dataRoot, { recursive: true, force: true });
+  const services = await startLocalServices({ dataRoot, ports: { postgres: 54349, s3: 54350, smtp: 54345 }, database: "jigboard_bench", fast: true, log: () => {} });
+  let app: ChildProcess | undefined;
+  try {
+    const db = drizzle(new pg.Pool({ connectionString: services.env.DATABASE_URL }), { schema });
+    const [user] = await db.insert(schema.users).values({ email: `bench-${Date.now()}@bench.example`, name: "Bench", passwordHash: "x" }).returning();
+    const [channel] = await db.insert(schema.channels).values({ name: "Bench" }).returning();
+    await db.insert(schema.memberships).values({ channelId: channel!.id, userId: user!.id, roles: ["editor"] });
+    const [episode] = await db.insert(schema.episodes).values({ channelId: channel!.id, title: "Bench", stage: "editing", position: 0 }).returning();
+    const secret = crypto.randomBytes(32).toString("base64url");
+    const env = { ...process.env, ...services.env, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: `http://127.0.0.1:${PORT}`, UPLOAD_PART_BYTES: String(PART), NODE_ENV: "production" as const, NEXT_TELEMETRY_DISABLED: "1" };
+    const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
+    if (buildIsStale(root)) spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env });
+    app = spawn(process.execPath, [nextBin, "start", "-H", "127.0.0.1", "-p", String(PORT)], { env, stdio: "ignore" });
+    for (let i = 0; i < 200; i++) {
+      if (await fetch(`http://127.0.0.1:${PORT}/api/health`).then((r) => r.ok).catch(() => false)) break;
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    const chunk = crypto.randomBytes(PART);
+    const cookie = `next-auth.session-token=${await encode({ token: { sub: user!.id }, secret })}`;
+    const partBody = (n: number, count: number) => (n < count ? chunk : chunk.subarray(0, SIZE - PART * (count - 1)));
+    const call = async (url: string, method: string, body?: unknown) => {
+      const r = await fetch(`http://127.0.0.1:${PORT}${url}`, { method, headers: { cookie, "content-type": "application/json" }, body: body ? JSON.stringify(body) : undefined });
+      if (!r.ok) throw new Error(`${method} ${url}: ${r.status} ${await r.text()}`);
+      return r.json() as Promise<any>;
+    };
+
+    // Warm the app with one small upload (loads the storage client and MediaInfo), then measure its resting memory.
+    const warm = await call(`/api/episodes/${episode!.id}/uploads`, "POST", { fileName: "warm.mp4", size: 1024, contentType: "video/mp4" });
+    const warmUrl = (await call(`/api/clips/${warm.clip.id}/parts`, "POST", { partNumbers: [1] })).urls[0].url;
+    await fetch(warmUrl, { method: "PUT", body: chunk.subarray(0, 1024) as unknown as BodyInit });
+    await call(`/api/clips/${warm.clip.id}/complete`, "POST");
+    await new Promise((r) => setTimeout(r, 500));
+    const baseRss = rssKiB(app.pid!);
+    let peakRss = baseRss;
+    const sampler = setInterval(() => (peakRss = Math.max(peakRss, rssKiB(app!.pid!))), 100);
+
+    const t0 = performance.now();
+    const started = await call(`/api/episodes/${episode!.id}/uploads`, "POST", { fileName: "bench.mp4", size: SIZE, contentType: "video/mp4" });
+    const count: number = started.partCount;
+    const numbers = Array.from({ length: count }, (_, i) => i + 1);
+    const urls = new Map<number, string>();
+    for (let i = 0; i < numbers.length; i += 100) {
+      const r = await call(`/api/clips/${started.clip.id}/parts`, "POST", { partNumbers: numbers.slice(i, i + 100) });
+      for (const u of r.urls) urls.set(u.partNumber, u.url);
+    }
+    await pool(numbers, CONCURRENCY, async (n) => {
+      const r = await fetch(urls.get(n)!, { method: "PUT", body: partBody(n, count) as unknown as BodyInit });
+      if (!r.ok) throw new Error(`part ${n}: ${r.status}`);
+    });
+    const tComplete = performance.now();
+    await call(`/api/clips/${started.clip.id}/complete`, "POST");
+    const completeMs = performance.now() - tComplete;
+    const appMs = performance.now() - t0;
+    clearInterval(sampler);
+
+    // The same bytes with the SDK's own multipart calls, same part size and concurrency.
+    const s3 = new S3Client({ endpoint: services.env.S3_ENDPOINT, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" }, requestChecksumCalculation: "WHEN_REQUIRED", responseChecksumValidation: "WHEN_REQUIRED" });
+    const Bucket = services.env.S3_BUCKET!;
+    const Key = "bench/sdk.bin";
+    const t1 = performance.now();
+    const { UploadId } = await s3.send(new CreateMultipartUploadCommand({ Bucket, Key }));
+    const etags = new Map<number, string>();
+    await pool(numbers, CONCURRENCY, async (n) => {
+      const r = await s3.send(new UploadPartCommand({ Bucket, Key, UploadId, PartNumber: n, Body: partBody(n, count) }));
+      etags.set(n, r.ETag!);
+    });
+    await s3.send(new CompleteMultipartUploadCommand({ Bucket, Key, UploadId, MultipartUpload: { Parts: numbers.map((n) => ({ PartNumber: n, ETag: etags.get(n) })) } }));
+    const sdkMs = performance.now() - t1;
+    await s3.send(new DeleteObjectCommand({ Bucket, Key }));
+
+    const mib = SIZE / 1024 / 1024;
+    console.log(
+      JSON.stringify({
+        bench: `upload ${mib.toFixed(0)} MiB in ${count} parts`,
+        appMiBps: +(mib / (appMs / 1000)).toFixed(1),
+        sdkMiBps: +(mib / (sdkMs / 1000)).toFixed(1),
+        throughputRatio: +(sdkMs / appMs).toFixed(3),
+        goalRatio: 0.8,
+        appCompleteMs: Math.round(completeMs),
+        appServerRssGrowthMiB: +((peakRss - baseRss) / 1024).toFixed(1),
+        goalRssGrowthMiB: 50,
+      }),
+    );
+  } finally {
+    if (app) app.kill("SIGTERM");
+    await services.stop();
+    fs.rmSync(dataRoot, { recursive: true, force: true });
+  }
+}
+
+if (process.argv[1]?.endsWith("upload.ts")) void uploadBench();
