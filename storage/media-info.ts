@@ -3,7 +3,7 @@
  * WebAssembly) through ranged reads of the object: the file is never
  * downloaded whole.
  */
-import mediaInfoFactory from "mediainfo.js";
+import mediaInfoFactory, { type MediaInfo } from "mediainfo.js";
 import { readRange } from "./multipart";
 
 export interface MediaMeta {
@@ -23,8 +23,19 @@ const BLOCK = 256 * 1024;
 
 const num = (v: unknown) => (v == null || v === "" || Number.isNaN(Number(v)) ? null : Number(v));
 
-export async function readMediaMeta(key: string, size: number): Promise<MediaMeta> {
-  const mi = await mediaInfoFactory({ format: "object" });
+// One WebAssembly instance per process, compiled once; analyses take turns on it.
+let instance: Promise<MediaInfo<"object">> | null = null;
+let queue: Promise<unknown> = Promise.resolve();
+
+export function readMediaMeta(key: string, size: number): Promise<MediaMeta> {
+  const run = queue.then(() => analyse(key, size));
+  queue = run.catch(() => {});
+  return run;
+}
+
+async function analyse(key: string, size: number): Promise<MediaMeta> {
+  instance ??= mediaInfoFactory({ format: "object" });
+  const mi: MediaInfo<"object"> = await instance;
   let budget = READ_BUDGET_BYTES;
   const blocks = new Map<number, Uint8Array>();
   const block = async (i: number) => {
@@ -69,7 +80,9 @@ export async function readMediaMeta(key: string, size: number): Promise<MediaMet
       height: num(video?.Height),
       startTimecode: typeof tc?.TimeCode_FirstFrame === "string" ? tc.TimeCode_FirstFrame : null,
     };
-  } finally {
-    mi.close();
+  } catch (e) {
+    // A broken instance is not reused.
+    instance = null;
+    throw e;
   }
 }
