@@ -5,6 +5,7 @@ import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, use
 import { formatInches, parseMeasure } from "@/lib/fraction";
 import { MM_PER_INCH, PRICING_LABELS, PRICING_UNITS, formatMoney, type PricingUnit } from "@/lib/materials";
 import { Button } from "@/components/ui/button";
+import { TableHead } from "@/components/ui/table-head";
 import { Notice } from "@/components/ui/field";
 import { api } from "@/components/plan/types";
 
@@ -240,24 +241,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
       {data && data.rows.length > 0 ? (
         <div className="overflow-x-auto rounded-plank border border-timber-300 bg-white">
           <table className="w-full border-collapse text-sm" data-testid="cut-list-table">
-            <thead>
-              {table.getHeaderGroups().map((hg) => (
-                <tr key={hg.id} className="border-b border-timber-300 bg-timber-100 text-left">
-                  {hg.headers.map((h) => (
-                    <th key={h.id} className="px-2 py-1.5 font-medium" aria-sort={h.column.getIsSorted() === "asc" ? "ascending" : h.column.getIsSorted() === "desc" ? "descending" : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex items-center gap-1">
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden className="text-xs">{h.column.getIsSorted() === "asc" ? "▲" : h.column.getIsSorted() === "desc" ? "▼" : "↕"}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  ))}
-                </tr>
-              ))}
-            </thead>
+            <TableHead table={table} />
             <tbody>
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id} className="border-b border-timber-200 align-top">

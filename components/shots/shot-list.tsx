@@ -5,6 +5,7 @@ import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type RowSelectionState, type SortingState } from "@tanstack/react-table";
 import { SHOT_KINDS, SHOT_KIND_LABELS, SHOT_STATUSES, SHOT_STATUS_LABELS, type ShotKind, type ShotStatus } from "@/lib/schemas/footage";
 import { Button } from "@/components/ui/button";
+import { TableHead } from "@/components/ui/table-head";
 import { Notice } from "@/components/ui/field";
 
 interface Shot {
@@ -171,24 +172,7 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
       {rows.length ? (
         <div className="overflow-x-auto rounded-plank border border-timber-300 bg-white">
           <table className="w-full border-collapse text-sm" data-testid="shot-table">
-            <thead>
-              {table.getHeaderGroups().map((hg) => (
-                <tr key={hg.id} className="border-b border-timber-300 bg-timber-100 text-left">
-                  {hg.headers.map((h) => (
-                    <th key={h.id} className="px-2 py-1.5 font-medium">
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex items-center gap-1">
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden className="text-xs">{h.column.getIsSorted() === "asc" ? "▲" : h.column.getIsSorted() === "desc" ? "▼" : "↕"}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  ))}
-                </tr>
-              ))}
-            </thead>
+            <TableHead table={table} />
             <tbody>
               {table.getRowModel().rows.map((r) => (
                 <tr key={r.id} className="border-b border-timber-200 align-top" data-testid="shot-row" data-status={r.original.status}>
