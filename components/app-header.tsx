@@ -34,6 +34,9 @@ export function AppHeader({
           <Link className={link} href={`/c/${channelId}/members`}>
             People
           </Link>
+          <Link className={link} href={`/c/${channelId}/settings`}>
+            Settings
+          </Link>
           {mailbox && can(roles, "mailbox.read") ? (
             <Link className={link} href={`/c/${channelId}/mailbox`}>
               Dev mailbox

@@ -6,7 +6,7 @@
 import { z } from "zod";
 import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
-import { invitationAcceptSchema, invitationCreateSchema, memberRolesSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
+import { channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, memberRolesSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
 import { materialCreateSchema, materialUpdateSchema, photoUploadSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolUpdateSchema, STEP_STATUSES } from "./schemas/build";
 import { HAZARDS } from "./safety";
@@ -30,6 +30,7 @@ interface RouteDoc {
 }
 
 const channelSchema = z.object({ id: z.string(), name: z.string(), roles: z.array(z.enum(ROLES)), units: z.string(), currency: z.string() });
+const channelSettingsSchema = z.object({ id: z.string(), name: z.string(), units: z.enum(["imperial", "metric"]), currency: z.string(), brollGapMs: z.number(), toCameraMaxMs: z.number() }).meta({ id: "ChannelSettings" });
 const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), joinedAt: z.string() });
 const invitationSchema = z.object({ id: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), expiresAt: z.string() });
 const mailSchema = z.object({ id: z.string(), fromAddress: z.string(), toAddresses: z.array(z.string()), subject: z.string(), textBody: z.string(), receivedAt: z.string() });
@@ -185,6 +186,8 @@ const coverageSchema = z
 export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/health", summary: "Database and storage status", auth: false, response: z.object({ ok: z.boolean(), database: z.object({ ok: z.boolean() }), storage: z.object({ ok: z.boolean() }) }), errors: [503] },
   { method: "get", path: "/api/channels", summary: "Channels I belong to, with my roles", response: z.object({ channels: z.array(channelSchema) }), errors: [401] },
+  { method: "get", path: "/api/channels/{channelId}", summary: "A channel's settings", response: z.object({ channel: channelSettingsSchema }), errors: [401, 404] },
+  { method: "patch", path: "/api/channels/{channelId}", summary: "Change the channel's name, units, currency and B-roll gap thresholds (owner)", body: channelUpdateSchema, response: z.object({ channel: channelSettingsSchema }), errors: [400, 401, 403, 404] },
   { method: "get", path: "/api/channels/{channelId}/episodes", summary: "Episodes on the board (filters: stage, publish month, archived)", query: episodeListQuerySchema, response: z.object({ episodes: z.array(episodeSchema) }), errors: [400, 401, 404] },
   { method: "post", path: "/api/channels/{channelId}/episodes", summary: "Create an episode at the end of its stage", body: episodeCreateSchema, response: z.object({ episode: episodeSchema }), status: 201, errors: [400, 401, 403, 404] },
   { method: "get", path: "/api/episodes/{episodeId}", summary: "One episode", response: z.object({ episode: episodeSchema }), errors: [401, 404] },

@@ -53,3 +53,8 @@ export async function updateMemberRoles({ channelId, userId, roles }: { channelI
     return { ok: true as const };
   });
 }
+
+export async function updateChannel({ id, patch }: { id: string; patch: Partial<Pick<typeof channels.$inferInsert, "name" | "units" | "currency" | "brollGapMs" | "toCameraMaxMs">> }) {
+  const [row] = await db().update(channels).set(patch).where(eq(channels.id, id)).returning();
+  return row ?? null;
+}

@@ -34,3 +34,16 @@ export const resetConfirmSchema = z
   .meta({ id: "PasswordResetConfirm" });
 
 export const memberRolesSchema = z.object({ roles: rolesSchema }).strict().meta({ id: "MemberRoles" });
+
+export const channelUpdateSchema = z
+  .object({
+    name: z.string().trim().min(1, "give the channel a name").max(80),
+    units: z.enum(["imperial", "metric"]),
+    currency: z.string().regex(/^[A-Z]{3}$/, "use a 3-letter currency code such as USD"),
+    brollGapMs: z.number().int("whole milliseconds").min(0, "cannot be negative").max(60_000, "at most 60 s"),
+    toCameraMaxMs: z.number().int("whole milliseconds").min(1000, "at least 1 s").max(600_000, "at most 10 minutes"),
+  })
+  .partial()
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, { message: "send at least one field to change" })
+  .meta({ id: "ChannelUpdate" });

@@ -138,3 +138,26 @@ describe("coverage and gaps", () => {
     expect((await call(coverageRoute.GET as never, { params: { episodeId: ep }, user: w.outsider })).status).toBe(404);
   });
 });
+
+describe("channel settings", () => {
+  it("the owner sets the gap thresholds, and gaps follow", async () => {
+    const channelRoute = await import("@/app/api/channels/[channelId]/route");
+    const w2 = await makeWorld();
+    const ep = (await makeEpisode(w2.channel.id, "editing", 0, "Thresholds")).id;
+    await db().update(episodes).set({ frameRate: "25", dropFrame: false }).where(eq(episodes.id, ep));
+    await call(scriptRoute.POST as never, { method: "POST", params: { episodeId: ep }, body: { kind: "voice_over", text: words(25) }, user: w2.members.presenter });
+    await call(rangesRoute.POST as never, { method: "POST", params: { episodeId: ep }, body: { startFrame: 0, endFrame: 100 }, user: w2.members.editor });
+    const gapsNow = async () => (await call(coverageRoute.GET as never, { params: { episodeId: ep }, user: w2.members.editor })).json.openGaps;
+    expect(await gapsNow()).toBe(1); // 6 s bare, over the 2 s default
+    for (const [role, status] of [["presenter", 403], ["editor", 403]] as const) {
+      expect((await call(channelRoute.PATCH as never, { method: "PATCH", params: { channelId: w2.channel.id }, body: { brollGapMs: 10_000 }, user: w2.members[role] })).status).toBe(status);
+    }
+    expect((await call(channelRoute.PATCH as never, { method: "PATCH", params: { channelId: w2.channel.id }, body: { brollGapMs: 10_000 }, user: w2.outsider })).status).toBe(404);
+    const bad = await call(channelRoute.PATCH as never, { method: "PATCH", params: { channelId: w2.channel.id }, body: { brollGapMs: -1, currency: "euro" }, user: w2.members.owner });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.json.error.fields)).toEqual(expect.arrayContaining(["brollGapMs", "currency"]));
+    const ok = await call(channelRoute.PATCH as never, { method: "PATCH", params: { channelId: w2.channel.id }, body: { brollGapMs: 10_000, units: "metric" }, user: w2.members.owner });
+    expect(ok.json.channel).toMatchObject({ brollGapMs: 10_000, units: "metric" });
+    expect(await gapsNow()).toBe(0);
+  });
+});

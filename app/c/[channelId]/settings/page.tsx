@@ -1,0 +1,18 @@
+import { pageAccess } from "@/lib/server/page-access";
+import { getChannelById } from "@/db/queries/channels";
+import { can } from "@/lib/permissions";
+import { ChannelSettings } from "@/components/channel-settings";
+
+export const metadata = { title: "Channel settings" };
+
+export default async function SettingsPage({ params }: { params: Promise<{ channelId: string }> }) {
+  const { channelId } = await params;
+  const access = await pageAccess(channelId, "channel.read", `/c/${channelId}/settings`);
+  const c = (await getChannelById({ id: access.channelId }))!;
+  return (
+    <div className="mx-auto max-w-3xl space-y-4">
+      <h1 className="text-xl font-bold">Channel settings</h1>
+      <ChannelSettings channelId={access.channelId} canEdit={can(access.roles, "members.manage")} initial={{ name: c.name, units: c.units, currency: c.currency, brollGapMs: c.brollGapMs, toCameraMaxMs: c.toCameraMaxMs }} />
+    </div>
+  );
+}

@@ -1,0 +1,79 @@
+"use client";
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { TextField, SelectField, Notice } from "@/components/ui/field";
+import { Button } from "@/components/ui/button";
+
+interface Settings {
+  name: string;
+  units: "imperial" | "metric";
+  currency: string;
+  brollGapMs: number;
+  toCameraMaxMs: number;
+}
+
+export function ChannelSettings({ channelId, initial, canEdit }: { channelId: string; initial: Settings; canEdit: boolean }) {
+  const router = useRouter();
+  const [f, setF] = useState({ ...initial, broll: String(initial.brollGapMs / 1000), toCamera: String(initial.toCameraMaxMs / 1000) });
+  const [errors, setErrors] = useState<Record<string, string[]>>({});
+  const [msg, setMsg] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
+  return (
+    <form
+      aria-label="Channel settings"
+      className="grid gap-3 rounded-plank border border-timber-300 bg-white p-4 sm:grid-cols-2"
+      onSubmit={async (e) => {
+        e.preventDefault();
+        const body = { name: f.name, units: f.units, currency: f.currency.toUpperCase(), brollGapMs: Math.round(Number(f.broll) * 1000), toCameraMaxMs: Math.round(Number(f.toCamera) * 1000) };
+        const r = await fetch(`/api/channels/${channelId}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+        const data = await r.json();
+        if (!r.ok) {
+          setErrors(data.error.fields ?? {});
+          return setMsg({ tone: "error", text: data.error.message });
+        }
+        setErrors({});
+        setMsg({ tone: "ok", text: "Channel settings saved." });
+        router.refresh();
+      }}
+    >
+      {msg ? (
+        <div className="sm:col-span-2">
+          <Notice tone={msg.tone}>{msg.text}</Notice>
+        </div>
+      ) : null}
+      <TextField label="Channel name" disabled={!canEdit} value={f.name} onChange={(e) => setF({ ...f, name: e.target.value })} error={errors.name?.[0]} />
+      <SelectField label="Cut-list units" disabled={!canEdit} value={f.units} onChange={(e) => setF({ ...f, units: e.target.value as Settings["units"] })}>
+        <option value="imperial">Inches (imperial)</option>
+        <option value="metric">Millimetres (metric)</option>
+      </SelectField>
+      <TextField label="Currency (ISO code)" disabled={!canEdit} value={f.currency} onChange={(e) => setF({ ...f, currency: e.target.value })} error={errors.currency?.[0]} />
+      <div />
+      <TextField
+        label="B-roll gap: voice-over bare for more than (seconds)"
+        hint="Common practice is about 2 s."
+        inputMode="decimal"
+        disabled={!canEdit}
+        value={f.broll}
+        onChange={(e) => setF({ ...f, broll: e.target.value })}
+        error={errors.brollGapMs?.[0]}
+      />
+      <TextField
+        label="To camera without a cutaway for more than (seconds)"
+        hint="20 s by default."
+        inputMode="decimal"
+        disabled={!canEdit}
+        value={f.toCamera}
+        onChange={(e) => setF({ ...f, toCamera: e.target.value })}
+        error={errors.toCameraMaxMs?.[0]}
+      />
+      {canEdit ? (
+        <div>
+          <Button type="submit" variant="primary">
+            Save settings
+          </Button>
+        </div>
+      ) : (
+        <p className="text-sm text-walnut-700 sm:col-span-2">Only the owner changes channel settings.</p>
+      )}
+    </form>
+  );
+}
