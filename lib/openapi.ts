@@ -216,6 +216,7 @@ export const ROUTES: RouteDoc[] = [
   { method: "delete", path: "/api/materials/{materialId}", summary: "Delete a cut-list row", response: okSchema, errors: [401, 403, 404] },
   { method: "get", path: "/api/episodes/{episodeId}/materials/csv", summary: "Export the cut list as CSV (text/csv)", response: z.string(), errors: [401, 404] },
   { method: "post", path: "/api/episodes/{episodeId}/materials/csv", summary: "Import cut-list rows from CSV text; all rows or none, errors by line and field", textBody: "text/csv", response: z.object({ imported: z.number() }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "post", path: "/api/channels/{channelId}/photos", summary: "Sign a direct upload of a tool photo", body: photoUploadSchema, response: z.object({ key: z.string(), uploadUrl: z.string(), headers: z.record(z.string(), z.string()) }), status: 201, errors: [400, 401, 403, 404] },
   { method: "get", path: "/api/channels/{channelId}/tools", summary: "The channel's tool shelf", response: z.object({ tools: z.array(toolSchema) }), errors: [401, 404] },
   { method: "post", path: "/api/channels/{channelId}/tools", summary: "Add a tool to the shelf", body: toolCreateSchema, response: z.object({ tool: toolSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
   { method: "patch", path: "/api/tools/{toolId}", summary: "Edit a tool", body: toolUpdateSchema, response: z.object({ tool: toolSchema }), errors: [400, 401, 403, 404, 422] },

@@ -12,8 +12,9 @@ import { api, type ToolDto } from "@/components/plan/types";
 
 type Form = z.input<typeof toolCreateSchema>;
 
-export function ToolShelf({ channelId, tools, sponsors, canEdit }: { channelId: string; tools: ToolDto[]; sponsors: { id: string; name: string }[]; canEdit: boolean }) {
+export function ToolShelf({ channelId, tools, sponsors, canEdit, photoUrls }: { channelId: string; tools: ToolDto[]; sponsors: { id: string; name: string }[]; canEdit: boolean; photoUrls: Record<string, string> }) {
   const router = useRouter();
+  const [photo, setPhoto] = useState<File | null>(null);
   const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const form = useForm<Form>({ resolver: zodResolver(toolCreateSchema), defaultValues: { name: "", kind: "power_tool", acquisition: "bought", sponsorId: null, caution: "" } });
   const e = form.formState.errors;
@@ -42,7 +43,14 @@ export function ToolShelf({ channelId, tools, sponsors, canEdit }: { channelId: 
           <tbody>
             {tools.map((t) => (
               <tr key={t.id} className="border-b border-timber-200 align-top">
-                <td className="px-2 py-1.5 font-medium">{t.name}</td>
+                <td className="px-2 py-1.5 font-medium">
+                  <span className="flex items-center gap-2">
+                    {photoUrls[t.id] ? (
+                      <img src={photoUrls[t.id]} alt="" className="h-10 w-10 rounded-plank border border-timber-300 object-cover" />
+                    ) : null}
+                    {t.name}
+                  </span>
+                </td>
                 <td className="px-2">{TOOL_KIND_LABELS[t.kind as ToolKind] ?? t.kind}</td>
                 <td className="px-2">
                   {ACQUISITION_LABELS[t.acquisition as Acquisition] ?? t.acquisition}
@@ -75,7 +83,15 @@ export function ToolShelf({ channelId, tools, sponsors, canEdit }: { channelId: 
           className="grid gap-3 rounded-plank border border-timber-300 bg-white p-4 sm:grid-cols-2"
           onSubmit={form.handleSubmit(async (v) => {
             try {
-              await api(`/api/channels/${channelId}/tools`, { method: "POST", json: v });
+              let photoKey: string | null = null;
+              if (photo) {
+                const signed = await api<{ key: string; uploadUrl: string; headers: Record<string, string> }>(`/api/channels/${channelId}/photos`, { method: "POST", json: { contentType: photo.type, size: photo.size } });
+                const put = await fetch(signed.uploadUrl, { method: "PUT", headers: signed.headers, body: photo });
+                if (!put.ok) throw new Error("The photo upload failed; try again or add the tool without it.");
+                photoKey = signed.key;
+              }
+              await api(`/api/channels/${channelId}/tools`, { method: "POST", json: { ...v, photoKey } });
+              setPhoto(null);
               setMessage({ tone: "ok", text: `${v.name} is on the shelf.` });
               form.reset();
               router.refresh();
@@ -109,6 +125,10 @@ export function ToolShelf({ channelId, tools, sponsors, canEdit }: { channelId: 
             ))}
           </SelectField>
           <TextField className="sm:col-span-2" label="Caution for this tool (from its manual)" {...form.register("caution")} error={e.caution?.message} />
+          <label className="text-sm sm:col-span-2">
+            Photo (optional; JPEG, PNG or WebP)
+            <input type="file" accept="image/jpeg,image/png,image/webp" className="mt-1 block" onChange={(ev) => setPhoto(ev.target.files?.[0] ?? null)} />
+          </label>
           <div>
             <Button type="submit" variant="primary">
               Add to shelf
