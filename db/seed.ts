@@ -310,7 +310,7 @@ async function seedScripts(tx: SeedTx, episodeIds: Record<string, string>, stepI
     ["to_camera", "seat", "Next morning the panel had cupped about an eighth of an inch. The outside of these boards was dry. The inside was not. That water had to go somewhere, and it went into the shape of a shallow bowl."],
     ["voice_over", "rejoin", "So the panel goes back through the saw, right on the glue lines. The strips sit stickered in front of a fan for two days, and this time I check them with a moisture meter before any glue comes out.", { chapter: "Starting the seat again" }],
     ["voice_over", "battens", "Two battens underneath, screwed through slotted holes, keep the seat flat while still letting it move with the seasons. {2s}"],
-    ["voice_over", "legs", "The leg frames are simple half-laps cut on the table saw with a dado stack. Riving knife off for the dado, guard back on the moment it's done.", { pinSeconds: 260 }],
+    ["voice_over", "legs", "The leg frames are simple half-laps cut on the table saw with a dado stack. Riving knife off for the dado, guard back on the moment it's done.", { pinSeconds: 95 }],
     ["to_camera", "assemble", "End grain gets a sealer so it doesn't drink the rain, and that's the bench. It took two days longer than planned, and I'd call that a cheap lesson.", { chapter: "Finished bench" }],
   ]);
 
@@ -367,5 +367,5 @@ async function seedShotsAndFootage(tx: SeedTx, channelId: string, episodeIds: Re
       if (i < 2) await tx.insert(schema.coverageRanges).values({ episodeId, clipId: clip!.id, startFrame: Math.round((17 + i * 4) * 29.97), endFrame: Math.round((21 + i * 4) * 29.97) });
     }
   }
-  await tx.insert(schema.gaps).values({ episodeId, source: "marked", status: "open", startFrame: Math.round(200 * 29.97), endFrame: Math.round(206 * 29.97), note: "Need a wide of the whole bench before assembly" });
+  await tx.insert(schema.gaps).values({ episodeId, source: "marked", status: "open", startFrame: Math.round(100 * 29.97), endFrame: Math.round(106 * 29.97), note: "Need a wide of the whole bench before assembly" });
 }

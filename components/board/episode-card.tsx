@@ -121,16 +121,16 @@ export function EpisodeCard({
             </span>
           </p>
           {/* Progress figures, filled in as the script, shots, coverage and sponsor work land. */}
-          <dl className="mt-1.5 grid grid-cols-4 divide-x divide-timber-200 rounded-plank border border-timber-200 text-center">
+          <dl className="mt-1.5 grid grid-cols-2 gap-x-2 gap-y-0.5 rounded-plank border border-timber-200 px-1.5 py-1 text-xs">
             {[
               ["Script", scriptTitle(episode), scriptFigure(episode)],
               ["Shots", "Shots captured of planned", episode.shotsTotal ? `${episode.shotsDone}/${episode.shotsTotal}` : "—"],
               ["Gaps", "Open B-roll gaps", episode.openGaps == null ? "—" : String(episode.openGaps)],
               ["Sponsor", "Sponsor sign-off", "—"],
             ].map(([label, title, value]) => (
-              <div key={label} title={title} className="px-0.5 py-0.5">
-                <dt className="text-[10px] uppercase tracking-wide text-walnut-600">{label}</dt>
-                <dd className="num text-xs" data-testid={`card-${String(label).toLowerCase()}`}>
+              <div key={label} title={title} className="flex items-baseline justify-between gap-1">
+                <dt className="text-walnut-600">{label}</dt>
+                <dd className="num whitespace-nowrap" data-testid={`card-${String(label).toLowerCase()}`}>
                   {value}
                 </dd>
               </div>

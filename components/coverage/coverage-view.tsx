@@ -1,7 +1,7 @@
 "use client";
 import { useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
-import { formatTimecode, parseTimecode, type Rate } from "@/lib/timecode";
+import { formatTimecode, labelToFrames, nominalFps, parseTimecode, type Rate } from "@/lib/timecode";
 import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
@@ -45,10 +45,13 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
   const left = 90;
   const total = Math.max(data.totalFrames, 1);
   const x = (f: number) => left + (f / total) * (W - left - 10);
-  const fps = rate.num / rate.den;
-  const seconds = total / fps;
+  const seconds = total / nominalFps(rate);
   const stepS = [5, 10, 15, 30, 60, 120, 300, 600].find((s) => seconds / s <= 12) ?? 900;
-  const ticks = Array.from({ length: Math.floor(seconds / stepS) + 1 }, (_, i) => Math.round(i * stepS * fps));
+  // Ticks sit on whole timecode labels (00:30, 01:00…), so drop-frame rulers read cleanly.
+  const ticks = Array.from({ length: Math.floor(seconds / stepS) + 1 }, (_, i) => {
+    const t = i * stepS;
+    return labelToFrames({ hours: Math.floor(t / 3600), minutes: Math.floor(t / 60) % 60, seconds: t % 60, frames: 0 }, rate);
+  }).filter((f) => f <= total);
   const rows = { script: 28, broll: 70, gaps: 112 };
   const focusable = { tabIndex: 0, className: "outline-none focus:stroke-[#1f5f8b] focus:[stroke-width:3]" };
   return (
