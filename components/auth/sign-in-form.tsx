@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import Link from "next/link";
 import { signInSchema } from "@/lib/schemas/account";
+import { safeCallbackPath } from "@/lib/safe-redirect";
 import { TextField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { signInWithPassword } from "./api-client";
@@ -18,7 +19,7 @@ export function SignInForm({ callbackUrl, notice }: { callbackUrl: string; notic
     setError(null);
     const r = await signInWithPassword(v.email, v.password);
     if (!r.ok) return setError(r.message);
-    window.location.assign(callbackUrl.startsWith("/") ? callbackUrl : "/");
+    window.location.assign(safeCallbackPath(callbackUrl));
   });
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>

@@ -155,4 +155,15 @@ describe("dev mailbox", () => {
     const missing = await call(mailboxRoute.GET as never, { path: `/x`, user: w.members.owner });
     expect(missing.status).toBe(400);
   });
+
+  it("an owner sees only mail sent to the channel's own people and invitees", async () => {
+    const email = `only-ours-${Date.now()}@test.example`;
+    await call(invitesRoute.POST as never, { method: "POST", params: { channelId: w.channel.id }, body: { email, roles: ["editor"] }, user: w.members.owner });
+    await waitForMail(email, "invited you");
+    const ours = await call(mailboxRoute.GET as never, { path: `/x?channelId=${w.channel.id}`, user: w.members.owner });
+    expect(ours.json.messages.some((m: { toAddresses: string[] }) => m.toAddresses.includes(email))).toBe(true);
+    const theirs = await call(mailboxRoute.GET as never, { path: `/x?channelId=${w.other.id}`, user: w.outsider });
+    expect(theirs.status).toBe(200);
+    expect(theirs.json.messages.some((m: { toAddresses: string[] }) => m.toAddresses.includes(email))).toBe(false);
+  });
 });

@@ -3,7 +3,7 @@ import { env } from "@/lib/env";
 import { json, parseQuery, parseId, route, sessionUser } from "@/lib/server/api";
 import { requireChannel } from "@/lib/server/access";
 import { AppError } from "@/lib/server/errors";
-import { listMailMessages } from "@/db/queries/mail";
+import { listMailMessagesForChannel } from "@/db/queries/mail";
 
 const query = z.object({ channelId: z.string() }).strict();
 
@@ -13,6 +13,6 @@ export const GET = route(async (req) => {
   if (!env().DEV_MAILBOX) throw new AppError("not_found:mailbox", "The dev mailbox is turned off here.");
   const user = await sessionUser(req);
   await requireChannel(user.id, parseId(q.channelId, "channel"), "mailbox.read");
-  const rows = await listMailMessages({ limit: 100 });
+  const rows = await listMailMessagesForChannel({ channelId: q.channelId, limit: 100 });
   return json({ messages: rows.map((m) => ({ ...m, receivedAt: m.receivedAt.toISOString() })) });
 });

@@ -1,6 +1,6 @@
 import { format } from "date-fns";
 import { pageAccess } from "@/lib/server/page-access";
-import { listMailMessages } from "@/db/queries/mail";
+import { listMailMessagesForChannel } from "@/db/queries/mail";
 import { env } from "@/lib/env";
 import { Notice } from "@/components/ui/field";
 
@@ -23,7 +23,7 @@ export default async function MailboxPage({ params }: { params: Promise<{ channe
   const access = await pageAccess(channelId, "mailbox.read", `/c/${channelId}/mailbox`);
   if (!env().DEV_MAILBOX) return <Notice>The dev mailbox is turned off: mail goes to the real SMTP server.</Notice>;
   if (!access.allowed) return <Notice tone="error">Only the channel owner can read the dev mailbox.</Notice>;
-  const messages = await listMailMessages({ limit: 100 });
+  const messages = await listMailMessagesForChannel({ channelId: access.channelId, limit: 100 });
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <h1 className="text-xl font-bold">Dev mailbox</h1>
