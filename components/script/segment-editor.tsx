@@ -49,6 +49,7 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
   const [fieldError, setFieldError] = useState<string | null>(null);
   const [pinText, setPinText] = useState(segment.pinnedStartFrame != null ? formatTimecode(segment.pinnedStartFrame, rate) : "");
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const conflictRef = useRef<typeof conflict>(null);
   const inflight = useRef<Promise<SegmentDto | null> | null>(null);
   const textRef = useRef(text);
   const baseRef = useRef(base);
@@ -74,32 +75,42 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
     [segment.id],
   );
 
+  // Saves of one segment go out one at a time, each based on the newest stored version,
+  // so an autosave and a pin change never race each other into a conflict.
+  const chain = useRef<Promise<unknown>>(Promise.resolve());
   const save = useCallback(
-    async (fields: Partial<SegmentDto>): Promise<SegmentDto | null> => {
-      const version = baseRef.current.version;
-      report("saving");
-      try {
-        const { segment: stored } = await send<{ segment: SegmentDto }>(`/api/segments/${segment.id}`, "PATCH", { version, ...fields });
-        setBase(stored);
-        baseRef.current = stored;
-        props.onSaved(stored);
-        setFieldError(null);
-        report(textRef.current === stored.text ? "saved" : "pending");
-        return stored;
-      } catch (e) {
-        const err = e as SaveError;
-        if (err.status === 409 && err.current) {
-          setConflict({ theirs: err.current, mine: textRef.current, merged: proposeMerge(textRef.current, err.current.text) });
-          report("conflict");
-        } else if (err.status === 0) {
-          report("offline");
-          timer.current = setTimeout(() => void flushText(), 3000);
-        } else {
-          setFieldError(err.fields ? Object.values(err.fields).flat().join("; ") : err.message);
-          report("pending");
+    (fields: Partial<SegmentDto>): Promise<SegmentDto | null> => {
+      const run = chain.current.then(async (): Promise<SegmentDto | null> => {
+        if (conflictRef.current) return null;
+        const version = baseRef.current.version;
+        report("saving");
+        try {
+          const { segment: stored } = await send<{ segment: SegmentDto }>(`/api/segments/${segment.id}`, "PATCH", { version, ...fields });
+          setBase(stored);
+          baseRef.current = stored;
+          props.onSaved(stored);
+          setFieldError(null);
+          report(textRef.current === stored.text ? "saved" : "pending");
+          return stored;
+        } catch (e) {
+          const err = e as SaveError;
+          if (err.status === 409 && err.current) {
+            const c = { theirs: err.current, mine: textRef.current, merged: proposeMerge(textRef.current, err.current.text) };
+            conflictRef.current = c;
+            setConflict(c);
+            report("conflict");
+          } else if (err.status === 0) {
+            report("offline");
+            timer.current = setTimeout(() => void flushText(), 3000);
+          } else {
+            setFieldError(err.fields ? Object.values(err.fields).flat().join("; ") : err.message);
+            report("pending");
+          }
+          return null;
         }
-        return null;
-      }
+      });
+      chain.current = run.catch(() => null);
+      return run;
     },
     [segment.id],
   );
@@ -118,8 +129,6 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
     if (r && textRef.current !== r.text) return flushText();
     return r;
   }, [save]);
-  const conflictRef = useRef(conflict);
-  conflictRef.current = conflict;
 
   useImperativeHandle(ref, () => ({
     flush: flushText,
@@ -148,6 +157,7 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
     setBase(conflict.theirs);
     setConflict(null);
     conflictRef.current = null;
+    setPinText(conflict.theirs.pinnedStartFrame != null ? formatTimecode(conflict.theirs.pinnedStartFrame, rate) : "");
     setText(textToSave);
     textRef.current = textToSave;
     props.onDraft(segment.id, textToSave);

@@ -24,6 +24,8 @@ test("presenter creates an episode, moves it by keyboard and by menu, and it per
   const dndLive = page.locator('[id^="DndLiveRegion"]');
   await page.keyboard.press("Space");
   await expect(dndLive).toContainText(`“${title}” is over Sketchbook`);
+  // Give the sensor a moment to measure the columns, as a person's key presses would.
+  await page.waitForTimeout(300);
   await page.keyboard.press("ArrowRight");
   await expect(dndLive).toContainText(`“${title}” is over Planning`);
   await page.keyboard.press("Space");
