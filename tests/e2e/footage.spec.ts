@@ -73,3 +73,31 @@ test("editor uploads footage in parts with pause and resume, lays it as B-roll a
   await expect(page.getByTestId("shot-row").filter({ hasText: "Pickup" })).toHaveCount(1);
   await ctx.close();
 });
+
+test("an upload interrupted by a page reload resumes from the parts already stored", async ({ browser }) => {
+  const ctx = await browser.newContext();
+  const page = await ctx.newPage();
+  await new SignInPage(page).signIn("owner@jigboard.example");
+  const channelId = page.url().split("/c/")[1]!;
+  const ep = (await (await page.request.post(`/api/channels/${channelId}/episodes`, { data: { title: `Reload ${Date.now().toString(36)}`, stage: "editing", frameRate: "25" } })).json()).episode;
+  // A file on disk keeps its modification time, so choosing it again after the reload is recognised.
+  const file = "tests/.artifacts/B003_reload.mp4";
+  fs.writeFileSync(file, Buffer.concat([fs.readFileSync("db/demo-media/test-pattern.mp4"), Buffer.alloc(11 * 1024 * 1024, 7)]));
+  await page.route(/\/jigboard-media\/channel\/.*partNumber=/, async (route) => {
+    const part = Number(new URL(route.request().url()).searchParams.get("partNumber"));
+    await new Promise((r) => setTimeout(r, part === 1 ? 200 : 5000));
+    await route.continue().catch(() => {});
+  });
+  await page.goto(`/c/${channelId}/episodes/${ep.id}/footage`);
+  await page.getByTestId("footage-input").setInputFiles(file);
+  const row = () => page.getByTestId("upload-row").filter({ hasText: "B003_reload.mp4" });
+  await expect(row()).toContainText("parts 1/3");
+
+  await page.reload(); // the connection drops with parts 2 and 3 in flight
+  await page.unroute(/\/jigboard-media\/channel\/.*partNumber=/);
+  await page.getByTestId("footage-input").setInputFiles(file);
+  await expect(row().getByTestId("upload-status")).toHaveText("Done (resumed)", { timeout: 30_000 });
+  await expect(page.getByTestId("clip-row").filter({ hasText: "B003_reload.mp4" })).toHaveCount(1);
+  await shot(page, "upload-resumed-after-reload");
+  await ctx.close();
+});
