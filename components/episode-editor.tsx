@@ -29,6 +29,23 @@ export function EpisodeEditor({ episode, canEdit, canArchive, channelId }: { epi
           }
         }}
       />
+      {canArchive && episode.archivedAt ? (
+        <div className="flex items-center gap-2 border-t border-timber-200 pt-4">
+          <span className="text-sm">This episode is archived and off the board.</span>
+          <Button
+            onClick={async () => {
+              try {
+                await episodesApi.restore(episode.id);
+                router.refresh();
+              } catch (e) {
+                setError(e instanceof Error ? e.message : "Could not restore.");
+              }
+            }}
+          >
+            Restore to the board
+          </Button>
+        </div>
+      ) : null}
       {canArchive && !episode.archivedAt ? (
         <div className="border-t border-timber-200 pt-4">
           {error ? <Notice tone="error">{error}</Notice> : null}

@@ -193,6 +193,7 @@ export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/episodes/{episodeId}", summary: "One episode", response: z.object({ episode: episodeSchema }), errors: [401, 404] },
   { method: "patch", path: "/api/episodes/{episodeId}", summary: "Edit fields and/or move (stage, position) in one transaction", body: episodeUpdateSchema, response: z.object({ episode: episodeSchema }), errors: [400, 401, 403, 404, 409, 422] },
   { method: "delete", path: "/api/episodes/{episodeId}", summary: "Archive an episode", response: z.object({ episode: episodeSchema }), errors: [401, 403, 404, 409] },
+  { method: "post", path: "/api/episodes/{episodeId}/restore", summary: "Bring an archived episode back to the board", response: z.object({ episode: episodeSchema }), errors: [401, 403, 404, 409] },
   { method: "get", path: "/api/channels/{channelId}/members", summary: "Members and their roles", response: z.object({ members: z.array(memberSchema) }), errors: [401, 404] },
   { method: "patch", path: "/api/channels/{channelId}/members/{userId}", summary: "Change a member's roles (owner)", body: memberRolesSchema, response: z.object({ userId: z.string(), roles: z.array(z.enum(ROLES)) }), errors: [400, 401, 403, 404, 409] },
   { method: "get", path: "/api/channels/{channelId}/invitations", summary: "Open invitations (owner)", response: z.object({ invitations: z.array(invitationSchema) }), errors: [401, 403, 404] },

@@ -22,5 +22,7 @@ export const episodesApi = {
   create: (channelId: string, body: unknown) =>
     call<{ episode: EpisodeDto }>(`/api/channels/${channelId}/episodes`, { method: "POST", body: JSON.stringify(body) }).then((r) => r.episode),
   update: (id: string, body: unknown) => call<{ episode: EpisodeDto }>(`/api/episodes/${id}`, { method: "PATCH", body: JSON.stringify(body) }).then((r) => r.episode),
+  restore: (id: string) => call<{ episode: EpisodeDto }>(`/api/episodes/${id}/restore`, { method: "POST" }).then((r) => r.episode),
+  listArchived: (channelId: string) => call<{ episodes: EpisodeDto[] }>(`/api/channels/${channelId}/episodes?archived=true`).then((r) => r.episodes),
   archive: (id: string) => call<{ episode: EpisodeDto }>(`/api/episodes/${id}`, { method: "DELETE" }).then((r) => r.episode),
 };

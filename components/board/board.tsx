@@ -70,6 +70,8 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
   const [stageFilter, setStageFilter] = useState<Stage | "all">("all");
   const [month, setMonth] = useState("");
   const [creating, setCreating] = useState(false);
+  const [showArchived, setShowArchived] = useState(false);
+  const archived = useQuery({ queryKey: ["episodes-archived", channelId], queryFn: () => episodesApi.listArchived(channelId), enabled: showArchived });
 
   const items = dragItems ?? episodes;
   const title = (id: string) => episodes.find((e) => e.id === id)?.title ?? "episode";
@@ -249,6 +251,38 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
           </p>
         </div>
       ) : null}
+
+      <div className="text-sm">
+        <button type="button" className="text-chalk-600 underline" aria-expanded={showArchived} onClick={() => setShowArchived((v) => !v)}>
+          {showArchived ? "Hide archived episodes" : "Show archived episodes"}
+        </button>
+        {showArchived ? (
+          <ul className="mt-2 space-y-1" data-testid="archived-list">
+            {archived.data?.length === 0 ? <li className="text-walnut-700">Nothing archived.</li> : null}
+            {archived.data?.map((e) => (
+              <li key={e.id} className="flex items-center gap-2">
+                <span>{e.title}</span>
+                <span className="text-xs text-walnut-600">{STAGE_INFO[e.stage].label}</span>
+                {canCreate ? (
+                  <Button
+                    onClick={async () => {
+                      try {
+                        await episodesApi.restore(e.id);
+                        setStatus(`Restored “${e.title}” to ${STAGE_INFO[e.stage].label}.`);
+                        await Promise.all([qc.invalidateQueries({ queryKey: key }), archived.refetch()]);
+                      } catch (err) {
+                        setError((err as Error).message);
+                      }
+                    }}
+                  >
+                    Restore
+                  </Button>
+                ) : null}
+              </li>
+            ))}
+          </ul>
+        ) : null}
+      </div>
 
       <DndContext
         sensors={sensors}

@@ -161,3 +161,19 @@ export async function archiveEpisode({ id, channelId, userId }: { id: string; ch
     return row ?? null;
   });
 }
+
+/** Brings an archived episode back to the end of its stage's column. */
+export async function restoreEpisode({ id, channelId, userId }: { id: string; channelId: string; userId: string }) {
+  return db().transaction(async (tx) => {
+    await lockChannel(tx, channelId);
+    const [current] = await tx.select().from(episodes).where(and(eq(episodes.id, id), eq(episodes.channelId, channelId), isNotNull(episodes.archivedAt)));
+    if (!current) return null;
+    const column = await columnIds(tx, channelId, current.stage);
+    const [row] = await tx
+      .update(episodes)
+      .set({ archivedAt: null, position: column.length, updatedBy: userId, updatedAt: new Date() })
+      .where(eq(episodes.id, id))
+      .returning();
+    return row ?? null;
+  });
+}

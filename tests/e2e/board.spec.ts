@@ -54,6 +54,15 @@ test("presenter creates an episode, moves it by keyboard and by menu, and it per
   await expect(page.getByRole("heading", { name: `${title} (oak)` })).toBeVisible();
   await expect(page.getByRole("form", { name: "Edit episode" }).getByLabel("Target runtime (minutes or m:ss)")).toHaveValue("14");
   await shot(page, "episode-edit");
+
+  // Archiving takes it off the board; restoring brings it back to its stage.
+  await page.getByRole("button", { name: "Archive episode" }).click();
+  await page.getByRole("button", { name: "Yes, archive" }).click();
+  await page.waitForURL(/\/c\/[0-9a-f-]+$/);
+  await expect(board.card(`${title} (oak)`)).toHaveCount(0);
+  await page.getByRole("button", { name: "Show archived episodes" }).click();
+  await page.getByTestId("archived-list").getByRole("listitem").filter({ hasText: `${title} (oak)` }).getByRole("button", { name: "Restore" }).click();
+  await expect(board.column("Editing").getByTestId("episode-card").filter({ hasText: `${title} (oak)` })).toBeVisible();
 });
 
 test("sponsor liaison reads the board but moving is refused", async ({ page }) => {

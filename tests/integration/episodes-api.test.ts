@@ -248,5 +248,11 @@ describe("board order", () => {
     expect(list.json.episodes).toEqual([expect.objectContaining({ title: "stays", position: 0 })]);
     const archived = await call(listRoute.GET as never, { path: "/x?archived=true", params: { channelId: w6.channel.id }, user: w6.members.owner });
     expect(archived.json.episodes).toEqual([expect.objectContaining({ title: "gone" })]);
+    const restoreRoute = await import("@/app/api/episodes/[episodeId]/restore/route");
+    expect((await call(restoreRoute.POST as never, { method: "POST", params: { episodeId: e1.id }, user: w6.members.editor })).status).toBe(403);
+    expect((await call(restoreRoute.POST as never, { method: "POST", params: { episodeId: e1.id }, user: w6.outsider })).status).toBe(404);
+    const back = await call(restoreRoute.POST as never, { method: "POST", params: { episodeId: e1.id }, user: w6.members.producer });
+    expect(back.json.episode).toMatchObject({ archivedAt: null, stage: "idea", position: 1 });
+    expect((await call(restoreRoute.POST as never, { method: "POST", params: { episodeId: e1.id }, user: w6.members.producer })).status).toBe(409);
   });
 });
