@@ -9,12 +9,12 @@ export default async function EpisodeLayout({ children, params }: { children: Re
   const { access, episode } = await episodePage(channelId, episodeId, `/c/${channelId}/episodes/${episodeId}`);
   return (
     <div className="mx-auto max-w-5xl space-y-4">
-      <p className="text-sm">
+      <p className="text-sm print:hidden">
         <Link href={`/c/${access.channelId}`} className="text-chalk-600 underline">
           ← Episodes
         </Link>
       </p>
-      <div>
+      <div className="print:hidden">
         <p className="text-sm text-walnut-600">
           Stage {STAGE_INFO[episode.stage].step} · {STAGE_INFO[episode.stage].label}
           {episode.archivedAt ? " · archived" : ""}
@@ -24,7 +24,9 @@ export default async function EpisodeLayout({ children, params }: { children: Re
           {episode.frameRate} fps{episode.dropFrame ? " drop-frame" : ""} · updated {format(episode.updatedAt, "d MMM yyyy HH:mm")}
         </p>
       </div>
-      <EpisodeNav base={`/c/${access.channelId}/episodes/${episode.id}`} />
+      <div className="print:hidden">
+        <EpisodeNav base={`/c/${access.channelId}/episodes/${episode.id}`} />
+      </div>
       {children}
     </div>
   );
