@@ -70,7 +70,7 @@ export async function startLocalServices(opts: {
       stops.push(() => smtp.stop());
       out.SMTP_URL = smtp.url;
       out.DEV_MAILBOX = process.env.DEV_MAILBOX ?? "true";
-      log(`[smtp] fake mail server on ${smtp.url}; read messages at /mailbox`);
+      log(`[smtp] fake mail server on ${smtp.url}; owners read what it receives under Dev mailbox in the app`);
     } else if (!process.env.DEV_MAILBOX) {
       out.DEV_MAILBOX = "false";
     }
