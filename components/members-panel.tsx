@@ -8,6 +8,7 @@ import { invitationCreateSchema } from "@/lib/schemas/account";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/roles";
 import { TextField, Notice } from "./ui/field";
 import { Button } from "./ui/button";
+import { send } from "@/components/fetch-json";
 
 interface Member {
   userId: string;
@@ -22,12 +23,6 @@ interface Invite {
   expiresAt: string;
 }
 
-async function send(url: string, method: string, body?: unknown) {
-  const res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body ? JSON.stringify(body) : undefined });
-  const data = await res.json().catch(() => ({}));
-  if (!res.ok) throw Object.assign(new Error(data?.error?.message ?? "Request failed"), { fields: data?.error?.fields });
-  return data;
-}
 
 function RoleBoxes({ value, onChange, name }: { value: Role[]; onChange: (r: Role[]) => void; name: string }) {
   return (

@@ -1,20 +1,10 @@
 import type { EpisodeDto } from "@/lib/schemas/episode";
+import { ApiError, fetchJson } from "@/components/fetch-json";
 
-export class ApiError extends Error {
-  constructor(
-    message: string,
-    readonly status: number,
-    readonly fields?: Record<string, string[]>,
-  ) {
-    super(message);
-  }
-}
+export { ApiError };
 
-async function call<T>(url: string, init?: RequestInit): Promise<T> {
-  const res = await fetch(url, { ...init, headers: { "content-type": "application/json", ...(init?.headers ?? {}) } });
-  const data = await res.json().catch(() => ({}));
-  if (!res.ok) throw new ApiError(data?.error?.message ?? `Request failed (${res.status})`, res.status, data?.error?.fields);
-  return data as T;
+function call<T>(url: string, init?: { method?: string; body?: string }): Promise<T> {
+  return fetchJson<T>(url, { method: init?.method, body: init?.body, headers: { "content-type": "application/json" } });
 }
 
 export const episodesApi = {

@@ -5,6 +5,7 @@ import { formatTimecode, labelToFrames, nominalFps, parseTimecode, type Rate } f
 import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
+import { send } from "@/components/fetch-json";
 
 interface Gap {
   id: string | null;
@@ -32,12 +33,6 @@ interface CoverageDto {
 
 const KIND_FILL: Record<SegmentKind, string> = { to_camera: "#54402f", voice_over: "#b89a6a", sponsor_read: "#7a5a86", on_screen_text: "#e8d9bd" };
 
-async function send(url: string, method: string, body?: unknown) {
-  const r = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-  const data = await r.json().catch(() => ({}));
-  if (!r.ok) throw new Error(data?.error?.message ?? "Request failed");
-  return data;
-}
 
 /** Script, B-roll and gaps on one timecode ruler, the same scale for all three rows. */
 function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFocus: (text: string) => void }) {

@@ -6,6 +6,8 @@
  * the server which parts are already stored and sends only the rest; the
  * clip id is kept in localStorage so a reload can pick the same file up again.
  */
+import { send } from "@/components/fetch-json";
+
 export type UploadStatus = "preparing" | "uploading" | "paused" | "finishing" | "done" | "error" | "cancelled";
 
 export interface UploadState {
@@ -26,12 +28,7 @@ export interface UploadState {
 const CONCURRENCY = 4;
 const MAX_TRIES = 5;
 
-async function api<T>(url: string, method: string, body?: unknown): Promise<T> {
-  const res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-  const data = await res.json().catch(() => ({}));
-  if (!res.ok) throw Object.assign(new Error(data?.error?.message ?? `Request failed (${res.status})`), { status: res.status, fields: data?.error?.fields });
-  return data as T;
-}
+const api = <T>(url: string, method: string, body?: unknown) => send<T>(url, method, body);
 
 const EXT_TYPES: Record<string, string> = { mp4: "video/mp4", m4v: "video/mp4", mov: "video/quicktime", webm: "video/webm", mkv: "video/x-matroska", avi: "video/x-msvideo", mxf: "application/mxf", wav: "audio/wav", mp3: "audio/mpeg", m4a: "audio/mp4", aac: "audio/aac", flac: "audio/flac", jpg: "image/jpeg", jpeg: "image/jpeg", png: "image/png", webp: "image/webp", tif: "image/tiff", tiff: "image/tiff" };
 

@@ -1,3 +1,4 @@
+import { fetchJson } from "@/components/fetch-json";
 import type { Hazard } from "@/lib/safety";
 import type { StepStatus } from "@/lib/schemas/build";
 
@@ -38,13 +39,6 @@ export interface PlanDto {
   toolsUsed: (ToolDto & { steps: string[] })[];
 }
 
-export async function api<T>(url: string, init?: RequestInit & { json?: unknown }): Promise<T> {
-  const res = await fetch(url, {
-    ...init,
-    headers: { "content-type": "application/json", ...(init?.headers ?? {}) },
-    body: init?.json !== undefined ? JSON.stringify(init.json) : init?.body,
-  });
-  const data = await res.json().catch(() => ({}));
-  if (!res.ok) throw Object.assign(new Error(data?.error?.message ?? `Request failed (${res.status})`), { status: res.status, fields: data?.error?.fields as Record<string, string[]> | undefined });
-  return data as T;
+export function api<T>(url: string, init?: { method?: string; json?: unknown; body?: BodyInit | null }): Promise<T> {
+  return fetchJson<T>(url, init);
 }

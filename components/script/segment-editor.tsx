@@ -95,7 +95,8 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
         } catch (e) {
           const err = e as SaveError;
           if (err.status === 409 && err.current) {
-            const c = { theirs: err.current, mine: textRef.current, merged: proposeMerge(textRef.current, err.current.text) };
+            const theirs = err.current as SegmentDto;
+            const c = { theirs, mine: textRef.current, merged: proposeMerge(textRef.current, theirs.text) };
             conflictRef.current = c;
             setConflict(c);
             report("conflict");

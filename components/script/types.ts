@@ -20,25 +20,4 @@ export interface ScriptDto {
   segments: SegmentDto[];
 }
 
-export class SaveError extends Error {
-  constructor(
-    message: string,
-    readonly status: number,
-    readonly current?: SegmentDto,
-    readonly fields?: Record<string, string[]>,
-  ) {
-    super(message);
-  }
-}
-
-export async function send<T>(url: string, method: string, body?: unknown): Promise<T> {
-  let res: Response;
-  try {
-    res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-  } catch {
-    throw new SaveError("offline", 0);
-  }
-  const data = await res.json().catch(() => ({}));
-  if (!res.ok) throw new SaveError(data?.error?.message ?? `Request failed (${res.status})`, res.status, data?.error?.current, data?.error?.fields);
-  return data as T;
-}
+export { ApiError as SaveError, send } from "@/components/fetch-json";

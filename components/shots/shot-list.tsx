@@ -7,6 +7,7 @@ import { SHOT_KINDS, SHOT_KIND_LABELS, SHOT_STATUSES, SHOT_STATUS_LABELS, type S
 import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
 import { Notice } from "@/components/ui/field";
+import { send } from "@/components/fetch-json";
 
 interface Shot {
   id: string;
@@ -21,12 +22,6 @@ interface Shot {
   gapId: string | null;
 }
 
-async function send(url: string, method: string, body?: unknown) {
-  const r = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-  const data = await r.json().catch(() => ({}));
-  if (!r.ok) throw Object.assign(new Error(data?.error?.message ?? "Request failed"), { fields: data?.error?.fields });
-  return data;
-}
 
 function Cell({ value, canEdit, label, onSave }: { value: string; canEdit: boolean; label: string; onSave: (v: string) => Promise<void> }) {
   const [editing, setEditing] = useState(false);
