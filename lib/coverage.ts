@@ -97,3 +97,18 @@ export function computeCoverage(segments: CoverageSegment[], broll: Interval[], 
   const coveredVoiceOverFrames = length(intersect(vo, covered));
   return { gaps, voiceOverFrames, coveredVoiceOverFrames, coverage: voiceOverFrames ? coveredVoiceOverFrames / voiceOverFrames : 1 };
 }
+
+/** A gap as the coverage API reports it: computed or marked, with its status and timecodes. */
+export interface GapView {
+  id: string | null;
+  key: string;
+  source: "computed" | "marked";
+  reason: string | null;
+  status: "open" | "resolved" | "dismissed";
+  startFrame: number;
+  endFrame: number;
+  startTimecode: string;
+  endTimecode: string;
+  segmentId: string | null;
+  note: string;
+}

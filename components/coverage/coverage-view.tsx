@@ -3,23 +3,12 @@ import { useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { formatTimecode, labelToFrames, nominalFps, parseTimecode, type Rate } from "@/lib/timecode";
 import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
+import type { GapView } from "@/lib/coverage";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
 import { send } from "@/components/fetch-json";
 
-interface Gap {
-  id: string | null;
-  key: string;
-  source: "computed" | "marked";
-  reason: string | null;
-  status: "open" | "resolved" | "dismissed";
-  startFrame: number;
-  endFrame: number;
-  startTimecode: string;
-  endTimecode: string;
-  segmentId: string | null;
-  note: string;
-}
+type Gap = GapView;
 interface CoverageDto {
   rate: { id: string; dropFrame: boolean; num: number; den: number };
   totalFrames: number;

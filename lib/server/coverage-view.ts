@@ -1,22 +1,11 @@
 import "server-only";
-import { computeCoverage, type ComputedGap } from "../coverage";
+import { computeCoverage, type ComputedGap, type GapView } from "../coverage";
+
+export type { GapView };
 import { formatTimecode, msToFrames, rateOf } from "../timecode";
 import type { Channel, CoverageRange, Episode, Gap } from "../../db/schema";
 import type { scriptView } from "./script-view";
 
-export interface GapView {
-  id: string | null;
-  key: string;
-  source: "computed" | "marked";
-  reason: string | null;
-  status: "open" | "resolved" | "dismissed";
-  startFrame: number;
-  endFrame: number;
-  startTimecode: string;
-  endTimecode: string;
-  segmentId: string | null;
-  note: string;
-}
 
 export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs" | "toCameraMaxMs">, view: ReturnType<typeof scriptView>, ranges: CoverageRange[], stored: Gap[]) {
   const rate = rateOf(view.rate.id as Episode["frameRate"], view.rate.dropFrame);
