@@ -2,20 +2,11 @@
 import { useForm, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { episodeCreateSchema, episodeUpdateSchema, secondsToMinutesText, type EpisodeDto } from "@/lib/schemas/episode";
+import { episodeCreateSchema, episodeUpdateSchema, minutesTextToSeconds, secondsToMinutesText, type EpisodeDto } from "@/lib/schemas/episode";
 import { FRAME_RATE_IDS, allowsDropFrame, type FrameRateId } from "@/lib/frame-rate";
 import { STAGES, STAGE_INFO } from "@/lib/stages";
 import { TextField, SelectField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
-
-/** "14" → 840, "14:30" → 870, "" → null, anything else → NaN (the schema then names the field). */
-function minutesToSeconds(v: unknown): number | null {
-  const t = String(v ?? "").trim();
-  if (!t) return null;
-  const m = /^(\d{1,3})(?::([0-5]\d))?$/.exec(t);
-  if (!m) return Number.NaN;
-  return Number(m[1]) * 60 + (m[2] ? Number(m[2]) : 0);
-}
 
 /** What the inputs hold. */
 interface Fields {
@@ -59,7 +50,7 @@ export function EpisodeForm({
   const zod = zodResolver(schema as never) as unknown as Resolver<Values, unknown, Values>;
   const resolver: Resolver<Fields, unknown, Values> = async (fields, ctx, opts) => {
     const { targetText, ...rest } = fields;
-    const mapped: Values = { ...rest, targetRuntimeSeconds: minutesToSeconds(targetText), publishDate: fields.publishDate || null };
+    const mapped: Values = { ...rest, targetRuntimeSeconds: minutesTextToSeconds(targetText), publishDate: fields.publishDate || null };
     const r = await zod(mapped, ctx, opts as never);
     const errors = { ...r.errors } as Record<string, unknown>;
     if (errors.targetRuntimeSeconds) {

@@ -7,7 +7,6 @@
 import { execFileSync, spawnSync } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
-import os from "node:os";
 import crypto from "node:crypto";
 import pg from "pg";
 
@@ -125,8 +124,4 @@ export async function startLocalPostgres(opts: {
       runPg(bin, "pg_ctl", ["-D", dataDir, "-m", "fast", "-w", "stop"], { allowFail: true });
     },
   };
-}
-
-export function tmpName(prefix: string): string {
-  return path.join(os.tmpdir(), `${prefix}-${process.pid}-${Date.now()}`);
 }

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, lt } from "drizzle-orm";
 import { db } from "../client";
-import { clips, episodes, shots, type Clip } from "../schema";
+import { clips, shots, type Clip } from "../schema";
 
 export function toClipDto(c: Clip) {
   return {
@@ -77,14 +77,4 @@ export async function listStaleUploadingClips({ channelId, before }: { channelId
   const where = [eq(clips.state, "uploading"), lt(clips.createdAt, before)];
   if (channelId) where.push(eq(clips.channelId, channelId));
   return db().select().from(clips).where(and(...where));
-}
-
-export async function getClipWithChannel({ id }: { id: string }) {
-  const [row] = await db()
-    .select({ clip: clips, frameRate: episodes.frameRate, dropFrame: episodes.dropFrame })
-    .from(clips)
-    .innerJoin(episodes, eq(episodes.id, clips.episodeId))
-    .where(eq(clips.id, id))
-    .limit(1);
-  return row ?? null;
 }

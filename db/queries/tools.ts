@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
 import { db } from "../client";
-import { buildSteps, sponsors, stepTools, tools } from "../schema";
+import { sponsors, tools } from "../schema";
 import type { ToolCreate, ToolUpdate } from "../../lib/schemas/build";
 
 export async function listToolsByChannel({ channelId }: { channelId: string }) {
@@ -39,26 +39,4 @@ export async function archiveTool({ id, channelId }: { id: string; channelId: st
     .where(and(eq(tools.id, id), eq(tools.channelId, channelId), isNull(tools.archivedAt)))
     .returning();
   return row ?? null;
-}
-
-/** Every tool any step of the episode uses, with the steps that use it. */
-export async function listToolsUsedByEpisode({ episodeId }: { episodeId: string }) {
-  const rows = await db()
-    .select({ tool: tools, stepId: stepTools.stepId, stepTitle: buildSteps.title })
-    .from(stepTools)
-    .innerJoin(buildSteps, eq(buildSteps.id, stepTools.stepId))
-    .innerJoin(tools, eq(tools.id, stepTools.toolId))
-    .where(eq(buildSteps.episodeId, episodeId));
-  const map = new Map<string, { tool: (typeof rows)[number]["tool"]; steps: string[] }>();
-  for (const r of rows) {
-    const t = map.get(r.tool.id) ?? { tool: r.tool, steps: [] };
-    t.steps.push(r.stepTitle);
-    map.set(r.tool.id, t);
-  }
-  return [...map.values()].sort((a, b) => a.tool.name.localeCompare(b.tool.name));
-}
-
-export async function toolsByIds({ ids }: { ids: string[] }) {
-  if (ids.length === 0) return [];
-  return db().select().from(tools).where(inArray(tools.id, ids));
 }

@@ -1,7 +1,5 @@
 import { z } from "zod";
 
-export const uuidSchema = z.uuid({ message: "must be a valid id" });
-
 export const errorResponseSchema = z
   .object({
     error: z.object({

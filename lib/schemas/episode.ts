@@ -104,24 +104,13 @@ export const episodeSchema = z
   .meta({ id: "Episode" });
 export type EpisodeDto = z.infer<typeof episodeSchema>;
 
-/** The form's shape: numbers and dates come from inputs as strings and are mapped before parsing. */
-export const episodeFormSchema = z
-  .object({
-    title: episodeFields.title,
-    summary: episodeFields.summary,
-    targetMinutes: z.string().trim().regex(/^(\d{1,3}(:[0-5]\d)?)?$/, "use minutes or m:ss, e.g. 14:30"),
-    publishDate: z.union([z.literal(""), isoDate]),
-    frameRate: frameRateSchema,
-    dropFrame: z.boolean(),
-  })
-  .superRefine(dropFrameRule);
-export type EpisodeForm = z.infer<typeof episodeFormSchema>;
-
+/** "14" → 840, "14:30" → 870, "" → null, anything else → NaN (the schema then names the field). */
 export function minutesTextToSeconds(text: string): number | null {
   const t = text.trim();
   if (!t) return null;
-  const [m, s] = t.split(":");
-  return Number(m) * 60 + (s ? Number(s) : 0);
+  const m = /^(\d{1,3})(?::([0-5]\d))?$/.exec(t);
+  if (!m) return Number.NaN;
+  return Number(m[1]) * 60 + (m[2] ? Number(m[2]) : 0);
 }
 
 export function secondsToMinutesText(seconds: number | null): string {
