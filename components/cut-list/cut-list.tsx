@@ -6,6 +6,7 @@ import { formatInches, parseMeasure } from "@/lib/fraction";
 import { MM_PER_INCH, PRICING_LABELS, PRICING_UNITS, formatMoney, type PricingUnit } from "@/lib/materials";
 import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
+import { InlineEdit } from "@/components/ui/inline-edit";
 import { Notice } from "@/components/ui/field";
 import { api } from "@/components/plan/types";
 
@@ -42,51 +43,6 @@ function other(v: number, unit: "in" | "mm") {
   return unit === "in" ? `${(v * MM_PER_INCH).toFixed(1)} mm` : `${formatInches(v / MM_PER_INCH)} in`;
 }
 
-/** A cell that turns into an input on click; Enter or leaving saves, Escape cancels. */
-function EditableCell({ value, display, label, canEdit, onSave }: { value: string; display: React.ReactNode; label: string; canEdit: boolean; onSave: (v: string) => Promise<string | null> }) {
-  const [editing, setEditing] = useState(false);
-  const [draft, setDraft] = useState(value);
-  const [error, setError] = useState<string | null>(null);
-  if (!canEdit) return <>{display}</>;
-  if (!editing)
-    return (
-      <button type="button" className="w-full rounded-plank px-1 text-left hover:bg-timber-100" onClick={() => (setDraft(value), setEditing(true))} aria-label={`Edit ${label}`}>
-        {display}
-      </button>
-    );
-  const save = async () => {
-    if (draft === value) return setEditing(false);
-    const err = await onSave(draft);
-    if (err) setError(err);
-    else {
-      setError(null);
-      setEditing(false);
-    }
-  };
-  return (
-    <span className="block">
-      <input
-        autoFocus
-        aria-label={label}
-        aria-invalid={error ? true : undefined}
-        className="w-full min-w-16 rounded-plank border border-chalk-600 px-1 aria-[invalid]:border-[#9b0d23]"
-        value={draft}
-        onChange={(e) => setDraft(e.target.value)}
-        onBlur={save}
-        onKeyDown={(e) => {
-          if (e.key === "Enter") void save();
-          if (e.key === "Escape") setEditing(false);
-        }}
-      />
-      {error ? (
-        <span role="alert" className="block text-xs text-[#9b0d23]">
-          {error}
-        </span>
-      ) : null}
-    </span>
-  );
-}
-
 const col = createColumnHelper<Row>();
 
 export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { episodeId: string; canEdit: boolean; defaultUnit: "in" | "mm"; currency: string; steps: { id: string; title: string }[] }) {
@@ -111,11 +67,11 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
   const columns = [
     col.accessor("partName", {
       header: "Part",
-      cell: (c) => <EditableCell label={`part name of ${c.row.original.partName}`} canEdit={canEdit} value={c.getValue()} display={c.getValue()} onSave={(v) => patch(c.row.original.id, { partName: v })} />,
+      cell: (c) => <InlineEdit label={`part name of ${c.row.original.partName}`} canEdit={canEdit} value={c.getValue()} display={c.getValue()} onSave={(v) => patch(c.row.original.id, { partName: v })} />,
     }),
     col.accessor("material", {
       header: "Material",
-      cell: (c) => <EditableCell label={`material of ${c.row.original.partName}`} canEdit={canEdit} value={c.getValue()} display={c.getValue() || "—"} onSave={(v) => patch(c.row.original.id, { material: v })} />,
+      cell: (c) => <InlineEdit label={`material of ${c.row.original.partName}`} canEdit={canEdit} value={c.getValue()} display={c.getValue() || "—"} onSave={(v) => patch(c.row.original.id, { material: v })} />,
     }),
     ...(["thickness", "width", "length"] as const).map((d) =>
       col.accessor(d, {
@@ -123,7 +79,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
         cell: (c) => {
           const r = c.row.original;
           return (
-            <EditableCell
+            <InlineEdit
               label={`${d} of ${r.partName}`}
               canEdit={canEdit}
               value={r.unit === "in" ? formatInches(c.getValue()) : String(c.getValue())}
@@ -145,7 +101,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
     col.accessor("sizing", { header: "Sizing", cell: (c) => <span className="text-xs">{c.getValue()}</span> }),
     col.accessor("quantity", {
       header: "Qty",
-      cell: (c) => <EditableCell label={`quantity of ${c.row.original.partName}`} canEdit={canEdit} value={String(c.getValue())} display={<span className="num">{c.getValue()}</span>} onSave={(v) => patch(c.row.original.id, { quantity: Number(v) })} />,
+      cell: (c) => <InlineEdit label={`quantity of ${c.row.original.partName}`} canEdit={canEdit} value={String(c.getValue())} display={<span className="num">{c.getValue()}</span>} onSave={(v) => patch(c.row.original.id, { quantity: Number(v) })} />,
     }),
     col.accessor((r) => r.figures.boardFeet, { id: "bf", header: "Board ft", cell: (c) => <span className="num">{c.getValue().toFixed(2)}</span> }),
     col.accessor((r) => r.figures.cubicMetres, { id: "m3", header: "m³", cell: (c) => <span className="num">{c.getValue().toFixed(4)}</span> }),
@@ -153,7 +109,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
     col.accessor("unitPriceMinor", {
       header: "Unit price",
       cell: (c) => (
-        <EditableCell
+        <InlineEdit
           label={`unit price of ${c.row.original.partName}`}
           canEdit={canEdit}
           value={(c.getValue() / 100).toFixed(2)}
@@ -164,7 +120,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
     }),
     col.accessor("wastePercent", {
       header: "Waste %",
-      cell: (c) => <EditableCell label={`waste of ${c.row.original.partName}`} canEdit={canEdit} value={String(c.getValue())} display={<span className="num">{c.getValue()}</span>} onSave={(v) => patch(c.row.original.id, { wastePercent: Number(v) })} />,
+      cell: (c) => <InlineEdit label={`waste of ${c.row.original.partName}`} canEdit={canEdit} value={String(c.getValue())} display={<span className="num">{c.getValue()}</span>} onSave={(v) => patch(c.row.original.id, { wastePercent: Number(v) })} />,
     }),
     col.accessor((r) => r.figures.costMinor, { id: "cost", header: "Cost", cell: (c) => <span className="num">{formatMoney(c.getValue(), c.row.original.currency)}</span> }),
     col.display({

@@ -6,6 +6,7 @@ import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, g
 import { SHOT_KINDS, SHOT_KIND_LABELS, SHOT_STATUSES, SHOT_STATUS_LABELS, type ShotKind, type ShotStatus } from "@/lib/schemas/footage";
 import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
+import { InlineEdit } from "@/components/ui/inline-edit";
 import { Notice } from "@/components/ui/field";
 import { send } from "@/components/fetch-json";
 
@@ -22,23 +23,6 @@ interface Shot {
   gapId: string | null;
 }
 
-
-function Cell({ value, canEdit, label, onSave }: { value: string; canEdit: boolean; label: string; onSave: (v: string) => Promise<void> }) {
-  const [editing, setEditing] = useState(false);
-  const [draft, setDraft] = useState(value);
-  if (!canEdit) return <>{value || "—"}</>;
-  if (!editing)
-    return (
-      <button type="button" className="w-full rounded-plank px-1 text-left hover:bg-timber-100" aria-label={`Edit ${label}`} onClick={() => (setDraft(value), setEditing(true))}>
-        {value || <span className="text-walnut-500">—</span>}
-      </button>
-    );
-  const done = async () => {
-    setEditing(false);
-    if (draft !== value) await onSave(draft);
-  };
-  return <input autoFocus aria-label={label} className="w-full rounded-plank border border-chalk-600 px-1" value={draft} onChange={(e) => setDraft(e.target.value)} onBlur={done} onKeyDown={(e) => (e.key === "Enter" ? void done() : e.key === "Escape" ? setEditing(false) : undefined)} />;
-}
 
 const col = createColumnHelper<Shot>();
 
@@ -71,7 +55,7 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
       header: ({ table }) => <input type="checkbox" aria-label="Select all shots" className="accent-chalk-600" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />,
       cell: ({ row }) => <input type="checkbox" aria-label={`Select ${row.original.description}`} className="accent-chalk-600" checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />,
     }),
-    col.accessor("priority", { header: "Pri", cell: (c) => <Cell canEdit={canEdit} label={`priority of ${c.row.original.description}`} value={String(c.getValue())} onSave={(v) => patch(c.row.original.id, { priority: Number(v) })} /> }),
+    col.accessor("priority", { header: "Pri", cell: (c) => <InlineEdit canEdit={canEdit} label={`priority of ${c.row.original.description}`} value={String(c.getValue())} onSave={(v) => patch(c.row.original.id, { priority: Number(v) }).then(() => null)} /> }),
     col.accessor("kind", {
       header: "Kind",
       cell: (c) =>
@@ -87,10 +71,10 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
           SHOT_KIND_LABELS[c.getValue()]
         ),
     }),
-    col.accessor("description", { header: "What it shows", cell: (c) => <Cell canEdit={canEdit} label={`description of ${c.getValue()}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { description: v })} /> }),
+    col.accessor("description", { header: "What it shows", cell: (c) => <InlineEdit canEdit={canEdit} label={`description of ${c.getValue()}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { description: v }).then(() => null)} /> }),
     col.accessor((s) => (s.stepId ? (stepTitle.get(s.stepId) ?? "") : ""), { id: "step", header: "Build step" }),
-    col.accessor("framing", { header: "Framing", cell: (c) => <Cell canEdit={canEdit} label={`framing of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { framing: v })} /> }),
-    col.accessor("cameraNotes", { header: "Camera and lens", cell: (c) => <Cell canEdit={canEdit} label={`camera notes of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { cameraNotes: v })} /> }),
+    col.accessor("framing", { header: "Framing", cell: (c) => <InlineEdit canEdit={canEdit} label={`framing of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { framing: v }).then(() => null)} /> }),
+    col.accessor("cameraNotes", { header: "Camera and lens", cell: (c) => <InlineEdit canEdit={canEdit} label={`camera notes of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { cameraNotes: v }).then(() => null)} /> }),
     col.accessor("status", {
       header: "Status",
       cell: (c) =>
