@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { episodes, scriptRevisions, scriptSegments, users, type ScriptSegment } from "../schema";
 import type { SegmentCreate, SegmentSave } from "../../lib/schemas/script";
@@ -240,6 +240,5 @@ export async function restoreRevision({ revisionId, userId }: { revisionId: stri
 
 export async function listSegmentsByEpisodes({ episodeIds }: { episodeIds: string[] }) {
   if (episodeIds.length === 0) return [];
-  const { inArray } = await import("drizzle-orm");
   return db().select().from(scriptSegments).where(inArray(scriptSegments.episodeId, episodeIds)).orderBy(asc(scriptSegments.episodeId), asc(scriptSegments.position));
 }

@@ -4,6 +4,7 @@ import { materialCreateSchema, type MaterialCreate } from "@/lib/schemas/build";
 import { createMaterials, listMaterialsByEpisode, stepIdsOfEpisode, toMaterialInput } from "@/db/queries/materials";
 import { parseCsv, recordToBody, toCsv } from "@/lib/cut-list-csv";
 import { AppError } from "@/lib/server/errors";
+import { fileSlug } from "@/lib/file-name";
 
 type P = { episodeId: string };
 
@@ -15,7 +16,7 @@ export const GET = route<P>(async (req, params) => {
   const [rows, steps] = await Promise.all([listMaterialsByEpisode({ episodeId: episode.id }), stepIdsOfEpisode({ episodeId: episode.id })]);
   const title = new Map(steps.map((s) => [s.id, s.title]));
   const csv = toCsv(rows.map(toMaterialInput).map((r) => ({ ...r, stepTitle: r.stepId ? (title.get(r.stepId) ?? null) : null })));
-  const name = episode.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "episode";
+  const name = fileSlug(episode.title);
   return new Response(csv, { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="cut-list-${name}.csv"` } });
 });
 

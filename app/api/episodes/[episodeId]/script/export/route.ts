@@ -4,6 +4,7 @@ import { exportQuerySchema } from "@/lib/schemas/script";
 import { scriptViewFor } from "@/lib/server/script-view";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
+import { fileSlug } from "@/lib/file-name";
 
 type P = { episodeId: string };
 
@@ -13,7 +14,7 @@ export const GET = route<P>(async (req, params) => {
   const { episode } = await loadEpisode(user.id, params.episodeId);
   const view = await scriptViewFor(episode);
   const steps = new Map((await stepIdsOfEpisode({ episodeId: episode.id })).map((s) => [s.id, s.title]));
-  const slug = episode.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "episode";
+  const slug = fileSlug(episode.title);
   if (format === "json") {
     const body = {
       episode: { id: episode.id, title: episode.title, frameRate: episode.frameRate, dropFrame: episode.dropFrame, targetRuntimeSeconds: episode.targetRuntimeSeconds },
