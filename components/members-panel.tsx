@@ -8,6 +8,7 @@ import { invitationCreateSchema } from "@/lib/schemas/account";
 import { ROLES, ROLE_LABELS, type Role } from "@/lib/roles";
 import { TextField, Notice } from "./ui/field";
 import { Button } from "./ui/button";
+import { CheckboxLabel } from "./ui/checkbox";
 import { send } from "@/components/fetch-json";
 
 interface Member {
@@ -29,10 +30,7 @@ function RoleBoxes({ value, onChange, name }: { value: Role[]; onChange: (r: Rol
     <fieldset className="flex flex-wrap gap-x-3 gap-y-1">
       <legend className="sr-only">Roles for {name}</legend>
       {ROLES.map((r) => (
-        <label key={r} className="flex items-center gap-1 text-sm">
-          <input type="checkbox" checked={value.includes(r)} onChange={(e) => onChange(e.target.checked ? [...value, r] : value.filter((x) => x !== r))} />
-          {ROLE_LABELS[r]}
-        </label>
+        <CheckboxLabel key={r} className="text-sm" label={ROLE_LABELS[r]} checked={value.includes(r)} onChange={(e) => onChange(e.target.checked ? [...value, r] : value.filter((x) => x !== r))} />
       ))}
     </fieldset>
   );

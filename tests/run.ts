@@ -19,7 +19,10 @@ const root = process.cwd();
 const dataRoot = path.join(root, ".test-data");
 const artifacts = path.join(root, "tests", ".artifacts");
 const appPort = Number(process.env.TEST_APP_PORT ?? 3100);
-const only = process.argv.slice(2); // any of "static", "unit", "integration", "e2e"
+const SUITES = ["static", "unit", "integration", "e2e"];
+const only = process.argv.slice(2).filter((a) => SUITES.includes(a));
+// Anything else (a spec file, --grep) goes to Playwright, for running one e2e test while working on it.
+const playwrightArgs = process.argv.slice(2).filter((a) => !SUITES.includes(a));
 const want = (suite: string) => only.length === 0 || only.includes(suite);
 
 // Tests always use their own local services, never a configured real one.
@@ -145,7 +148,7 @@ async function main() {
     if (want("e2e")) {
       const out = path.join(artifacts, "playwright.json");
       fs.rmSync(out, { force: true });
-      await run(process.execPath, [path.join(root, "node_modules", "@playwright", "test", "cli.js"), "test", "--config", "tests/e2e/playwright.config.ts"], {
+      await run(process.execPath, [path.join(root, "node_modules", "@playwright", "test", "cli.js"), "test", "--config", "tests/e2e/playwright.config.ts", ...playwrightArgs], {
         ...env,
         PLAYWRIGHT_JSON_OUTPUT_NAME: out,
       });

@@ -1,5 +1,5 @@
 "use client";
-import { useMemo, useState } from "react";
+import { useCallback, useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import { formatInches, parseMeasure } from "@/lib/fraction";
@@ -51,9 +51,9 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
   const { data } = useQuery({ queryKey: key, queryFn: () => api<CutListDto>(`/api/episodes/${episodeId}/materials`) });
   const [sorting, setSorting] = useState<SortingState>([]);
   const [notice, setNotice] = useState<{ tone: "ok" | "error"; text: string; list?: string[] } | null>(null);
-  const refresh = () => qc.invalidateQueries({ queryKey: key });
+  const refresh = useCallback(() => qc.invalidateQueries({ queryKey: key }), [qc, key]);
 
-  const patch = async (id: string, body: Record<string, unknown>): Promise<string | null> => {
+  const patch = useCallback(async (id: string, body: Record<string, unknown>): Promise<string | null> => {
     try {
       await api(`/api/materials/${id}`, { method: "PATCH", json: body });
       await refresh();
@@ -62,9 +62,12 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
       const f = (e as { fields?: Record<string, string[]> }).fields;
       return f ? Object.values(f).flat().join("; ") : (e as Error).message;
     }
-  };
+  }, [refresh]);
 
-  const columns = [
+  // Stable columns and data: see the shot list for the render loop that unstable ones cause.
+  const columns = useMemo(() => {
+    const stepTitle = new Map(steps.map((s) => [s.id, s.title]));
+    return [
     col.accessor("partName", {
       header: "Part",
       cell: (c) => <InlineEdit label={`part name of ${c.row.original.partName}`} canEdit={canEdit} value={c.getValue()} display={c.getValue()} onSave={(v) => patch(c.row.original.id, { partName: v })} />,
@@ -73,6 +76,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
       header: "Material",
       cell: (c) => <InlineEdit label={`material of ${c.row.original.partName}`} canEdit={canEdit} value={c.getValue()} display={c.getValue() || "—"} onSave={(v) => patch(c.row.original.id, { material: v })} />,
     }),
+    col.accessor((r) => (r.stepId ? (stepTitle.get(r.stepId) ?? "") : ""), { id: "step", header: "Cut in step", cell: (c) => <span className="text-xs">{c.getValue() || "—"}</span> }),
     ...(["thickness", "width", "length"] as const).map((d) =>
       col.accessor(d, {
         header: d === "thickness" ? "T" : d === "width" ? "W" : "L",
@@ -84,8 +88,11 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
               canEdit={canEdit}
               value={r.unit === "in" ? formatInches(c.getValue()) : String(c.getValue())}
               display={
-                <span className="num whitespace-nowrap" title={other(c.getValue(), r.unit)}>
+                <span className="num whitespace-nowrap">
                   {dim(c.getValue(), r.unit)}
+                  <span className="block text-xs text-walnut-600" data-testid="size-other-unit">
+                    {other(c.getValue(), r.unit)}
+                  </span>
                 </span>
               }
               onSave={async (v) => {
@@ -141,8 +148,10 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
         ) : null,
     }),
   ];
+  }, [canEdit, steps, patch, refresh]);
 
-  const table = useReactTable({ data: data?.rows ?? [], columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  const rows = useMemo(() => data?.rows ?? [], [data]);
+  const table = useReactTable({ data: rows, columns, autoResetAll: false, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
 
   async function importFile(file: File) {
     setNotice(null);
@@ -171,7 +180,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
             <input type="file" accept=".csv,text/csv" className="sr-only" onChange={(e) => e.target.files?.[0] && void importFile(e.target.files[0])} data-testid="csv-import" />
           </label>
         ) : null}
-        <span className="text-xs text-walnut-600">Sizes accept 3/4, 1-1/2 or decimals. Hover a size to see it in the other unit.</span>
+        <span className="text-xs text-walnut-600">Sizes accept 3/4, 1-1/2 or decimals. Each size also shows in the other unit, under it.</span>
       </div>
       {notice ? (
         <div data-testid="cut-list-notice">
@@ -212,7 +221,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
             {t ? (
               <tfoot>
                 <tr className="bg-timber-100 font-medium" data-testid="cut-list-total">
-                  <td className="px-2 py-1.5" colSpan={7}>
+                  <td className="px-2 py-1.5" colSpan={8}>
                     Total ({t.rows} rows{t.sheetsToBuy ? `, ${t.sheetsToBuy} sheets to buy` : ""})
                   </td>
                   <td className="num px-2">{t.boardFeet.toFixed(2)}</td>

@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { useMemo, useState } from "react";
+import { useCallback, useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type RowSelectionState, type SortingState } from "@tanstack/react-table";
 import { SHOT_KINDS, SHOT_KIND_LABELS, SHOT_STATUSES, SHOT_STATUS_LABELS, type ShotKind, type ShotStatus } from "@/lib/schemas/footage";
@@ -8,6 +8,7 @@ import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
 import { InlineEdit } from "@/components/ui/inline-edit";
 import { Notice } from "@/components/ui/field";
+import { Checkbox } from "@/components/ui/checkbox";
 import { send } from "@/components/fetch-json";
 
 interface Shot {
@@ -37,62 +38,77 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
   const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const [planStep, setPlanStep] = useState("");
   const [newShot, setNewShot] = useState({ kind: "broll", description: "", stepId: "" });
-  const refresh = () => qc.invalidateQueries({ queryKey: key });
-  const stepTitle = new Map(steps.map((s) => [s.id, s.title]));
-  const patch = async (id: string, body: Record<string, unknown>) => {
-    try {
-      await send(`/api/shots/${id}`, "PATCH", body);
-      await refresh();
-    } catch (e) {
-      setMessage({ tone: "error", text: (e as Error).message });
-    }
-  };
+  const refresh = useCallback(() => qc.invalidateQueries({ queryKey: key }), [qc, key]);
+  const patch = useCallback(
+    async (id: string, body: Record<string, unknown>) => {
+      try {
+        await send(`/api/shots/${id}`, "PATCH", body);
+        await refresh();
+      } catch (e) {
+        setMessage({ tone: "error", text: (e as Error).message });
+      }
+    },
+    [refresh],
+  );
 
-  const rows = (data?.shots ?? []).filter((s) => (!statusFilter || s.status === statusFilter) && (!text || `${s.description} ${s.framing} ${s.cameraNotes}`.toLowerCase().includes(text.toLowerCase())));
-  const columns = [
-    col.display({
-      id: "select",
-      header: ({ table }) => <input type="checkbox" aria-label="Select all shots" className="accent-chalk-600" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />,
-      cell: ({ row }) => <input type="checkbox" aria-label={`Select ${row.original.description}`} className="accent-chalk-600" checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />,
-    }),
-    col.accessor("priority", { header: "Pri", cell: (c) => <InlineEdit canEdit={canEdit} label={`priority of ${c.row.original.description}`} value={String(c.getValue())} onSave={(v) => patch(c.row.original.id, { priority: Number(v) }).then(() => null)} /> }),
-    col.accessor("kind", {
-      header: "Kind",
-      cell: (c) =>
-        canEdit ? (
-          <select aria-label={`Kind of ${c.row.original.description}`} className="rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { kind: e.target.value })}>
-            {SHOT_KINDS.map((k) => (
-              <option key={k} value={k}>
-                {SHOT_KIND_LABELS[k]}
-              </option>
-            ))}
-          </select>
-        ) : (
-          SHOT_KIND_LABELS[c.getValue()]
-        ),
-    }),
-    col.accessor("description", { header: "What it shows", cell: (c) => <InlineEdit canEdit={canEdit} label={`description of ${c.getValue()}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { description: v }).then(() => null)} /> }),
-    col.accessor((s) => (s.stepId ? (stepTitle.get(s.stepId) ?? "") : ""), { id: "step", header: "Build step" }),
-    col.accessor("framing", { header: "Framing", cell: (c) => <InlineEdit canEdit={canEdit} label={`framing of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { framing: v }).then(() => null)} /> }),
-    col.accessor("cameraNotes", { header: "Camera and lens", cell: (c) => <InlineEdit canEdit={canEdit} label={`camera notes of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { cameraNotes: v }).then(() => null)} /> }),
-    col.accessor("status", {
-      header: "Status",
-      cell: (c) =>
-        canEdit ? (
-          <select aria-label={`Status of ${c.row.original.description}`} className="rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { status: e.target.value })}>
-            {SHOT_STATUSES.map((s) => (
-              <option key={s} value={s}>
-                {SHOT_STATUS_LABELS[s]}
-              </option>
-            ))}
-          </select>
-        ) : (
-          SHOT_STATUS_LABELS[c.getValue()]
-        ),
-    }),
-    col.display({ id: "gap", header: "From gap", cell: (c) => (c.row.original.gapId ? "yes" : "") }),
-  ];
-  const table = useReactTable({ data: rows, columns, state: { sorting, rowSelection: selection }, getRowId: (r) => r.id, enableRowSelection: canEdit, onRowSelectionChange: setSelection, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(), getFilteredRowModel: getFilteredRowModel() });
+  // The table's data and columns must keep their identity between renders:
+  // a fresh array on every render makes the table reset its page index, which
+  // renders again, which makes a fresh array (a render loop that locks the tab).
+  const rows = useMemo(() => {
+    const needle = text.toLowerCase();
+    return (data?.shots ?? []).filter((s) => (!statusFilter || s.status === statusFilter) && (!needle || `${s.description} ${s.framing} ${s.cameraNotes}`.toLowerCase().includes(needle)));
+  }, [data, statusFilter, text]);
+  const columns = useMemo(() => {
+    const stepTitle = new Map(steps.map((s) => [s.id, s.title]));
+    return [
+      ...(canEdit
+        ? [
+            col.display({
+              id: "select",
+              header: ({ table }) => <Checkbox aria-label="Select all shots" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />,
+              cell: ({ row }) => <Checkbox aria-label={`Select ${row.original.description}`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />,
+            }),
+          ]
+        : []),
+      col.accessor("priority", { header: "Pri", cell: (c) => <InlineEdit canEdit={canEdit} label={`priority of ${c.row.original.description}`} value={String(c.getValue())} onSave={(v) => patch(c.row.original.id, { priority: Number(v) }).then(() => null)} /> }),
+      col.accessor("kind", {
+        header: "Kind",
+        cell: (c) =>
+          canEdit ? (
+            <select aria-label={`Kind of ${c.row.original.description}`} className="jb-tap rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { kind: e.target.value })}>
+              {SHOT_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {SHOT_KIND_LABELS[k]}
+                </option>
+              ))}
+            </select>
+          ) : (
+            SHOT_KIND_LABELS[c.getValue()]
+          ),
+      }),
+      col.accessor("description", { header: "What it shows", cell: (c) => <InlineEdit canEdit={canEdit} label={`description of ${c.getValue()}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { description: v }).then(() => null)} /> }),
+      col.accessor((s) => (s.stepId ? (stepTitle.get(s.stepId) ?? "") : ""), { id: "step", header: "Build step" }),
+      col.accessor("framing", { header: "Framing", cell: (c) => <InlineEdit canEdit={canEdit} label={`framing of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { framing: v }).then(() => null)} /> }),
+      col.accessor("cameraNotes", { header: "Camera and lens", cell: (c) => <InlineEdit canEdit={canEdit} label={`camera notes of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { cameraNotes: v }).then(() => null)} /> }),
+      col.accessor("status", {
+        header: "Status",
+        cell: (c) =>
+          canEdit ? (
+            <select aria-label={`Status of ${c.row.original.description}`} className="jb-tap rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { status: e.target.value })}>
+              {SHOT_STATUSES.map((s) => (
+                <option key={s} value={s}>
+                  {SHOT_STATUS_LABELS[s]}
+                </option>
+              ))}
+            </select>
+          ) : (
+            SHOT_STATUS_LABELS[c.getValue()]
+          ),
+      }),
+      col.display({ id: "gap", header: "From gap", cell: (c) => (c.row.original.gapId ? "yes" : "") }),
+    ];
+  }, [canEdit, steps, patch]);
+  const table = useReactTable({ data: rows, columns, state: { sorting, rowSelection: selection }, getRowId: (r) => r.id, enableRowSelection: canEdit, autoResetAll: false, onRowSelectionChange: setSelection, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(), getFilteredRowModel: getFilteredRowModel() });
   const selected = Object.keys(selection).filter((k) => selection[k]);
 
   return (
