@@ -22,7 +22,9 @@ export function InlineEdit({
   if (!canEdit) return <>{display}</>;
   if (!editing)
     return (
-      <button type="button" className="w-full rounded-plank px-1 text-left hover:bg-timber-100" onClick={() => (setDraft(value), setEditing(true))} aria-label={`Edit ${label}`}>
+      // The visible value stays part of the button's name (WCAG 2.5.3), after what the button edits.
+      <button type="button" className="jb-tap w-full rounded-plank px-1 text-left hover:bg-timber-100" onClick={() => (setDraft(value), setEditing(true))}>
+        <span className="sr-only">Edit {label}: </span>
         {display}
       </button>
     );

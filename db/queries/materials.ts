@@ -1,6 +1,7 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "../client";
+import { touchEpisode } from "./episode-lock";
 import { buildSteps, materials, type MaterialRow } from "../schema";
 import type { MaterialCreate, MaterialUpdate } from "../../lib/schemas/build";
 import type { MaterialRowInput, PricingUnit } from "../../lib/materials";
@@ -53,6 +54,7 @@ export async function stepIdsOfEpisode({ episodeId }: { episodeId: string }) {
 /** Inserts rows in one transaction: all of them or none. */
 export async function createMaterials({ episodeId, rows }: { episodeId: string; rows: MaterialCreate[] }) {
   return db().transaction(async (tx) => {
+    await touchEpisode(tx, episodeId);
     const existing = await tx.select({ id: materials.id }).from(materials).where(eq(materials.episodeId, episodeId));
     if (rows.length === 0) return [];
     return tx
@@ -63,15 +65,21 @@ export async function createMaterials({ episodeId, rows }: { episodeId: string; 
 }
 
 export async function updateMaterial({ id, episodeId, patch }: { id: string; episodeId: string; patch: MaterialUpdate }) {
-  const [row] = await db()
-    .update(materials)
-    .set(toDb(patch))
-    .where(and(eq(materials.id, id), eq(materials.episodeId, episodeId)))
-    .returning();
-  return row ?? null;
+  return db().transaction(async (tx) => {
+    await touchEpisode(tx, episodeId);
+    const [row] = await tx
+      .update(materials)
+      .set(toDb(patch))
+      .where(and(eq(materials.id, id), eq(materials.episodeId, episodeId)))
+      .returning();
+    return row ?? null;
+  });
 }
 
 export async function deleteMaterial({ id, episodeId }: { id: string; episodeId: string }) {
-  const [row] = await db().delete(materials).where(and(eq(materials.id, id), eq(materials.episodeId, episodeId))).returning();
-  return row ?? null;
+  return db().transaction(async (tx) => {
+    await touchEpisode(tx, episodeId);
+    const [row] = await tx.delete(materials).where(and(eq(materials.id, id), eq(materials.episodeId, episodeId))).returning();
+    return row ?? null;
+  });
 }

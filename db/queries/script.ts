@@ -1,6 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
+import { touchEpisode } from "./episode-lock";
 import { episodes, scriptRevisions, scriptSegments, users, type ScriptSegment } from "../schema";
 import type { SegmentCreate, SegmentSave } from "../../lib/schemas/script";
 
@@ -44,8 +45,10 @@ export async function getSegmentById({ id }: { id: string }) {
   return row ?? null;
 }
 
-async function lockEpisode(tx: Tx, episodeId: string) {
-  await tx.select({ id: episodes.id }).from(episodes).where(eq(episodes.id, episodeId)).for("update");
+/** The episode a segment belongs to (it never changes), read before any lock so the episode is locked first. */
+async function episodeOfSegment(tx: Tx, id: string) {
+  const [row] = await tx.select({ episodeId: scriptSegments.episodeId }).from(scriptSegments).where(eq(scriptSegments.id, id));
+  return row?.episodeId ?? null;
 }
 
 async function orderedIds(tx: Tx, episodeId: string) {
@@ -68,7 +71,7 @@ async function revision(tx: Tx, episodeId: string, segmentId: string, userId: st
 
 export async function createSegment({ episodeId, userId, input }: { episodeId: string; userId: string; input: SegmentCreate }) {
   return db().transaction(async (tx) => {
-    await lockEpisode(tx, episodeId);
+    await touchEpisode(tx, episodeId);
     const ids = await orderedIds(tx, episodeId);
     const { afterId, ...fields } = input;
     if (afterId && !ids.includes(afterId)) return { error: "after_not_found" as const };
@@ -90,6 +93,9 @@ export async function createSegment({ episodeId, userId, input }: { episodeId: s
  */
 export async function saveSegment({ id, userId, save }: { id: string; userId: string; save: SegmentSave }) {
   return db().transaction(async (tx) => {
+    const episodeId = await episodeOfSegment(tx, id);
+    if (!episodeId) return { missing: true as const };
+    await touchEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return { missing: true as const };
     if (current.version !== save.version) return { conflict: current };
@@ -106,9 +112,11 @@ export async function saveSegment({ id, userId, save }: { id: string; userId: st
 
 export async function splitSegment({ id, userId, version, before, after }: { id: string; userId: string; version: number; before: string; after: string }) {
   return db().transaction(async (tx) => {
+    const episodeId = await episodeOfSegment(tx, id);
+    if (!episodeId) return { missing: true as const };
+    await touchEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return { missing: true as const };
-    await lockEpisode(tx, current.episodeId);
     if (current.version !== version) return { conflict: current };
     const [first] = await tx
       .update(scriptSegments)
@@ -131,9 +139,11 @@ export async function splitSegment({ id, userId, version, before, after }: { id:
 /** Appends the next segment's text to this one and removes the next; both versions must be current. */
 export async function joinWithNext({ id, userId, version, nextVersion }: { id: string; userId: string; version: number; nextVersion: number }) {
   return db().transaction(async (tx) => {
+    const episodeId = await episodeOfSegment(tx, id);
+    if (!episodeId) return { missing: true as const };
+    await touchEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return { missing: true as const };
-    await lockEpisode(tx, current.episodeId);
     const ids = await orderedIds(tx, current.episodeId);
     const nextId = ids[ids.indexOf(id) + 1];
     if (!nextId) return { noNext: true as const };
@@ -156,9 +166,11 @@ export async function joinWithNext({ id, userId, version, nextVersion }: { id: s
 
 export async function deleteSegment({ id, userId }: { id: string; userId: string }) {
   return db().transaction(async (tx) => {
+    const episodeId = await episodeOfSegment(tx, id);
+    if (!episodeId) return null;
+    await touchEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return null;
-    await lockEpisode(tx, current.episodeId);
     await tx.delete(scriptSegments).where(eq(scriptSegments.id, id));
     await renumber(tx, await orderedIds(tx, current.episodeId));
     await revision(tx, current.episodeId, id, userId, current, null);
@@ -168,7 +180,7 @@ export async function deleteSegment({ id, userId }: { id: string; userId: string
 
 export async function reorderSegments({ episodeId, ids, check }: { episodeId: string; ids: string[]; check: (current: string[]) => void }) {
   return db().transaction(async (tx) => {
-    await lockEpisode(tx, episodeId);
+    await touchEpisode(tx, episodeId);
     check(await orderedIds(tx, episodeId));
     await renumber(tx, ids);
   });
@@ -206,7 +218,7 @@ export async function restoreRevision({ revisionId, userId }: { revisionId: stri
     if (!rev || !rev.segmentId) return null;
     const state = (rev.after ?? rev.before) as Snapshot | null;
     if (!state) return null;
-    await lockEpisode(tx, rev.episodeId);
+    await touchEpisode(tx, rev.episodeId);
     const fields = {
       kind: state.kind,
       text: state.text,

@@ -82,7 +82,7 @@ test("a cut list of 55 parts and a script of 55 segments stay responsive while e
   await page.goto(`${base}/cut-list`);
   await expect(page.getByTestId("cut-list-table").locator("tbody tr")).toHaveCount(55);
   await responsive(page);
-  await page.getByRole("button", { name: "Edit part name of Slat 3", exact: true }).click();
+  await page.getByRole("button", { name: "Edit part name of Slat 3:" }).click();
   const input = page.getByRole("textbox", { name: "part name of Slat 3", exact: true });
   await input.pressSequentially(" (left)", { delay: 20 });
   await expect(input).toHaveValue("Slat 3 (left)");
