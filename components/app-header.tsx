@@ -18,9 +18,9 @@ export function AppHeader({
 }) {
   const link = "rounded-plank px-2 py-1 text-timber-100 hover:bg-walnut-700 hover:text-white";
   return (
-    <header className="bg-walnut-900 text-timber-50 print:hidden">
+    <header className="on-dark bg-walnut-900 text-timber-50 print:hidden">
       <div className="mx-auto flex max-w-[1600px] flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
-        <Link href={`/c/${channelId}`} className="text-lg font-bold tracking-tight">
+        <Link href={`/c/${channelId}`} className="rounded-plank text-lg font-bold tracking-tight">
           Jigboard
         </Link>
         <ChannelSwitcher channels={channels} current={channelId} />

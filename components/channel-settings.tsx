@@ -3,6 +3,15 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { TextField, SelectField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
+import { ApiError, send } from "@/components/fetch-json";
+
+const LABELS: Record<string, string> = {
+  name: "Channel name",
+  units: "Cut-list units",
+  currency: "Currency",
+  brollGapMs: "B-roll gap",
+  toCameraMaxMs: "To camera without a cutaway",
+};
 
 interface Settings {
   name: string;
@@ -17,6 +26,24 @@ export function ChannelSettings({ channelId, initial, canEdit }: { channelId: st
   const [f, setF] = useState({ ...initial, broll: String(initial.brollGapMs / 1000), toCamera: String(initial.toCameraMaxMs / 1000) });
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [msg, setMsg] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
+  if (!canEdit)
+    return (
+      <div className="rounded-plank border border-timber-300 bg-white p-4 text-sm" data-testid="settings-read-only">
+        <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
+          <dt className="text-walnut-700">Channel name</dt>
+          <dd>{initial.name}</dd>
+          <dt className="text-walnut-700">Cut-list units</dt>
+          <dd>{initial.units === "metric" ? "Millimetres (metric)" : "Inches (imperial)"}</dd>
+          <dt className="text-walnut-700">Currency</dt>
+          <dd className="num">{initial.currency}</dd>
+          <dt className="text-walnut-700">B-roll gap</dt>
+          <dd>voice-over bare for more than <span className="num">{initial.brollGapMs / 1000} s</span></dd>
+          <dt className="text-walnut-700">To camera without a cutaway</dt>
+          <dd>for more than <span className="num">{initial.toCameraMaxMs / 1000} s</span></dd>
+        </dl>
+        <p className="mt-3 text-walnut-700">Only the owner changes channel settings.</p>
+      </div>
+    );
   return (
     <form
       aria-label="Channel settings"
@@ -24,11 +51,14 @@ export function ChannelSettings({ channelId, initial, canEdit }: { channelId: st
       onSubmit={async (e) => {
         e.preventDefault();
         const body = { name: f.name, units: f.units, currency: f.currency.toUpperCase(), brollGapMs: Math.round(Number(f.broll) * 1000), toCameraMaxMs: Math.round(Number(f.toCamera) * 1000) };
-        const r = await fetch(`/api/channels/${channelId}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-        const data = await r.json();
-        if (!r.ok) {
-          setErrors(data.error.fields ?? {});
-          return setMsg({ tone: "error", text: data.error.message });
+        try {
+          await send(`/api/channels/${channelId}`, "PATCH", body);
+        } catch (err) {
+          const fields = err instanceof ApiError ? (err.fields ?? {}) : {};
+          setErrors(fields);
+          // Name the fields by their labels, as the form shows them, never by the API's field names.
+          const named = Object.entries(fields).map(([k, v]) => `${LABELS[k] ?? "A field"}: ${v.join("; ")}`);
+          return setMsg({ tone: "error", text: named.length ? `Not saved. ${named.join(". ")}.` : (err as Error).message });
         }
         setErrors({});
         setMsg({ tone: "ok", text: "Channel settings saved." });

@@ -7,6 +7,7 @@ import { FRAME_RATE_IDS, allowsDropFrame, type FrameRateId } from "@/lib/frame-r
 import { STAGES, STAGE_INFO } from "@/lib/stages";
 import { TextField, SelectField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
+import { Checkbox } from "@/components/ui/checkbox";
 
 /** What the inputs hold. */
 interface Fields {
@@ -131,7 +132,7 @@ export function EpisodeForm({
         ))}
       </SelectField>
       <div className="flex items-end gap-2 pb-2">
-        <input id="episode-drop-frame" type="checkbox" className="accent-chalk-600" {...register("dropFrame")} />
+        <Checkbox id="episode-drop-frame" {...register("dropFrame")} />
         <label htmlFor="episode-drop-frame" className="text-sm">
           Drop-frame timecode {allowsDropFrame(rate) ? "" : "(only at 29.97 and 59.94)"}
         </label>

@@ -106,3 +106,62 @@ export function formatMinutes(total: number): string {
   const m = total % 60;
   return [d ? `${d}d` : "", h ? `${h}h` : "", m || (!d && !h) ? `${m}m` : ""].filter(Boolean).join(" ");
 }
+
+export interface CrewStep extends PlanStep {
+  crewNeeded: number;
+}
+
+export interface CrewTiming {
+  steps: Record<string, StepTiming & { crewDelayMinutes: number }>;
+  /** When the last step's wait is over, counting crew. */
+  finishMinutes: number;
+  /** Steps that need more people than the team has; they are placed as if the whole team were enough. */
+  overCrew: string[];
+}
+
+/**
+ * The same chain of durations, but hands-on time counts people: at no moment
+ * do the steps being worked on need more than `crew` people together. Waits
+ * (glue curing, finish drying) need nobody. Steps are placed one at a time,
+ * the one that could start soonest first (ties by plan order), each at the
+ * first moment after its dependencies when enough people are free: a greedy
+ * list schedule, not a proven optimum. Still elapsed time from the first
+ * step, not clock times: nights and days off are for the shoot-day schedule.
+ */
+export function crewTiming(steps: CrewStep[], crew: number): CrewTiming {
+  const cycle = findCycle(steps);
+  if (cycle) throw new Error(`dependency cycle: ${cycle.join(" → ")}`);
+  const team = Math.max(1, Math.floor(crew));
+  const known = new Set(steps.map((s) => s.id));
+  const placed: { id: string; start: number; activeEnd: number; need: number }[] = [];
+  const out: CrewTiming["steps"] = {};
+  const overCrew: string[] = [];
+  const usageAt = (x: number) => placed.reduce((a, p) => (p.start <= x && x < p.activeEnd ? a + p.need : a), 0);
+  const left = steps.map((s, index) => ({ s, index }));
+  while (left.length) {
+    let best: { k: number; est: number } | null = null;
+    left.forEach(({ s, index }, k) => {
+      const deps = s.dependsOn.filter((d) => known.has(d));
+      if (!deps.every((d) => out[d])) return;
+      const est = Math.max(0, ...deps.map((d) => out[d]!.end));
+      if (!best || est < best.est || (est === best.est && index < left[best.k]!.index)) best = { k, est };
+    });
+    const { k, est } = best!;
+    const { s } = left.splice(k, 1)[0]!;
+    const { active, wait } = duration(s);
+    const need = Math.min(team, Math.max(0, s.crewNeeded));
+    if (s.crewNeeded > team) overCrew.push(s.id);
+    let start = est;
+    if (active > 0 && need > 0) {
+      // Free people only appear when a placed step's hands-on time ends.
+      const candidates = [est, ...placed.map((p) => p.activeEnd).filter((t) => t > est)].sort((a, b) => a - b);
+      start = candidates.find((t) => {
+        const points = [t, ...placed.map((p) => p.start).filter((x) => x > t && x < t + active)];
+        return points.every((x) => usageAt(x) + need <= team);
+      })!;
+      placed.push({ id: s.id, start, activeEnd: start + active, need });
+    }
+    out[s.id] = { start, activeEnd: start + active, end: start + active + wait, crewDelayMinutes: start - est };
+  }
+  return { steps: out, finishMinutes: Math.max(0, ...Object.values(out).map((t) => t.end)), overCrew };
+}

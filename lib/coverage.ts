@@ -111,4 +111,24 @@ export interface GapView {
   endTimecode: string;
   segmentId: string | null;
   note: string;
+  /** The pickup shot made for this gap, if any: the gap stays open until B-roll covers it, but needs no second pickup. */
+  pickupShotId: string | null;
+}
+
+/**
+ * Lays intervals in lanes so that none overlap within a lane: each goes in
+ * the first lane whose last interval has ended (interval-graph colouring in
+ * start order, which uses the fewest lanes possible).
+ */
+export function packLanes(intervals: { start: number; end: number }[]): number[] {
+  const order = intervals.map((iv, i) => ({ ...iv, i })).sort((a, b) => a.start - b.start || a.end - b.end);
+  const laneEnds: number[] = [];
+  const lanes = new Array<number>(intervals.length);
+  for (const iv of order) {
+    let lane = laneEnds.findIndex((e) => e <= iv.start);
+    if (lane === -1) lane = laneEnds.push(iv.end) - 1;
+    else laneEnds[lane] = iv.end;
+    lanes[iv.i] = lane;
+  }
+  return lanes;
 }

@@ -138,3 +138,27 @@ export function formatDuration(frames: number, rate: Rate): string {
   const totalSeconds = Math.floor(tenths / 10);
   return `${formatClock(totalSeconds)}.${tenths % 10}`;
 }
+
+/**
+ * Ruler ticks at whole labelled seconds (00:10, 00:20, 01:00…), at most
+ * about `maxTicks` of them. The text is the label itself, never a rounded
+ * frame count: at drop-frame a minute's ;00 and ;01 labels do not exist, so
+ * that tick sits on the first label the minute has (;02 or ;04), still
+ * reading 01:00 rather than the 00:59 the frame before it would show.
+ */
+export function rulerTicks(totalFrames: number, rate: Rate, maxTicks = 12): { frame: number; label: string }[] {
+  const seconds = framesToSeconds(Math.max(0, totalFrames), rate);
+  const step = [1, 2, 5, 10, 15, 30, 60, 120, 300, 600, 900, 1800, 3600].find((s) => seconds / s <= maxTicks) ?? 7200;
+  const d = dropPerMinute(rate);
+  const out: { frame: number; label: string }[] = [];
+  for (let t = 0; ; t += step) {
+    const hours = Math.floor(t / 3600);
+    const minutes = Math.floor(t / 60) % 60;
+    const secs = t % 60;
+    const skipped = d && secs === 0 && minutes % 10 !== 0;
+    const frame = labelToFrames({ hours, minutes, seconds: secs, frames: skipped ? d : 0 }, rate);
+    if (frame > totalFrames) break;
+    out.push({ frame, label: hours ? `${hours}:${p2(minutes)}:${p2(secs)}` : `${p2(minutes)}:${p2(secs)}` });
+  }
+  return out;
+}

@@ -1,4 +1,5 @@
 "use client";
+import Link from "next/link";
 import { useMemo, useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import {
@@ -66,6 +67,8 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
   const { data: episodes = initial } = useQuery({ queryKey: key, queryFn: () => episodesApi.list(channelId), initialData: initial });
   const [dragItems, setDragItems] = useState<EpisodeDto[] | null>(null);
   const [status, setStatus] = useState("");
+  // The new episode is also shown to sighted users, not only announced.
+  const [added, setAdded] = useState<{ id: string; title: string; stage: Stage } | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [stageFilter, setStageFilter] = useState<Stage | "all">("all");
   const [month, setMonth] = useState("");
@@ -215,6 +218,19 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
       <p role="status" aria-live="polite" className="sr-only" data-testid="board-status">
         {status}
       </p>
+      {added ? (
+        <div className="flex flex-wrap items-center gap-2 rounded-plank border-l-4 border-[#2f6b3a] bg-[#e7f3e8] px-3 py-2 text-sm text-[#173d1d]" data-testid="board-added">
+          <span>
+            Added “{added.title}” to {STAGE_INFO[added.stage].step} · {STAGE_INFO[added.stage].label}.
+          </span>
+          <Link className="font-medium underline" href={`/c/${channelId}/episodes/${added.id}`}>
+            Open it to plan the build
+          </Link>
+          <button type="button" className="ml-auto rounded-plank px-2 hover:bg-white" onClick={() => setAdded(null)}>
+            Dismiss
+          </button>
+        </div>
+      ) : null}
       {error ? (
         <div data-testid="board-error">
           <Notice tone="error">{error}</Notice>
@@ -231,6 +247,7 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
                 const ep = await episodesApi.create(channelId, values);
                 await qc.invalidateQueries({ queryKey: key });
                 setStatus(`Added “${ep.title}” to ${STAGE_INFO[ep.stage].label}.`);
+                setAdded({ id: ep.id, title: ep.title, stage: ep.stage });
                 setCreating(false);
                 return { ok: true, episode: ep };
               } catch (e) {

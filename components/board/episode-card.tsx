@@ -120,17 +120,16 @@ export function EpisodeCard({
               Target <span className="num text-walnut-900">{runtime(episode.targetRuntimeSeconds)}</span>
             </span>
           </p>
-          {/* Progress figures, filled in as the script, shots, coverage and sponsor work land. */}
-          <dl className="mt-1.5 grid grid-cols-2 gap-x-2 gap-y-0.5 rounded-plank border border-timber-200 px-1.5 py-1 text-xs">
+          {/* Progress figures: label above value, so a long figure never runs into its neighbour. The sponsor figure comes with sponsor deals. */}
+          <dl className="mt-1.5 grid grid-cols-3 gap-x-2 rounded-plank border border-timber-200 px-1.5 py-1 text-xs">
             {[
               ["Script", scriptTitle(episode), scriptFigure(episode)],
               ["Shots", "Shots captured of planned", episode.shotsTotal ? `${episode.shotsDone}/${episode.shotsTotal}` : "—"],
               ["Gaps", "Open B-roll gaps", episode.openGaps == null ? "—" : String(episode.openGaps)],
-              ["Sponsor", "Sponsor sign-off", "—"],
             ].map(([label, title, value]) => (
-              <div key={label} title={title} className="flex items-baseline justify-between gap-1">
+              <div key={label} title={title} className="min-w-0">
                 <dt className="text-walnut-600">{label}</dt>
-                <dd className="num whitespace-nowrap" data-testid={`card-${String(label).toLowerCase()}`}>
+                <dd className="num truncate text-walnut-900" data-testid={`card-${String(label).toLowerCase()}`}>
                   {value}
                 </dd>
               </div>

@@ -1,9 +1,10 @@
 "use client";
+import Link from "next/link";
 import { useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
-import { formatTimecode, labelToFrames, nominalFps, parseTimecode, type Rate } from "@/lib/timecode";
+import { parseTimecode, rulerTicks, type Rate } from "@/lib/timecode";
 import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
-import type { GapView } from "@/lib/coverage";
+import { packLanes, type GapView } from "@/lib/coverage";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
 import { send } from "@/components/fetch-json";
@@ -29,22 +30,21 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
   const left = 90;
   const total = Math.max(data.totalFrames, 1);
   const x = (f: number) => left + (f / total) * (W - left - 10);
-  const seconds = total / nominalFps(rate);
-  const stepS = [5, 10, 15, 30, 60, 120, 300, 600].find((s) => seconds / s <= 12) ?? 900;
-  // Ticks sit on whole timecode labels (00:30, 01:00…), so drop-frame rulers read cleanly.
-  const ticks = Array.from({ length: Math.floor(seconds / stepS) + 1 }, (_, i) => {
-    const t = i * stepS;
-    return labelToFrames({ hours: Math.floor(t / 3600), minutes: Math.floor(t / 60) % 60, seconds: t % 60, frames: 0 }, rate);
-  }).filter((f) => f <= total);
+  const ticks = rulerTicks(total, rate);
+  // Open gaps that overlap (a marked gap over a computed one) go in lanes of their own.
+  const openGaps = data.gaps.filter((g) => g.status === "open");
+  const lanes = packLanes(openGaps.map((g) => ({ start: g.startFrame, end: g.endFrame })));
+  const laneCount = Math.max(1, ...lanes.map((l) => l + 1));
   const rows = { script: 28, broll: 70, gaps: 112 };
+  const H = rows.gaps + laneCount * 22 + 16;
   const focusable = { tabIndex: 0, className: "outline-none focus:stroke-[#1f5f8b] focus:[stroke-width:3]" };
   return (
-    <svg viewBox={`0 0 ${W} 150`} width="100%" role="group" aria-label="Coverage timeline: script, B-roll and gaps" className="min-w-[700px] rounded-plank border border-timber-300 bg-white" data-testid="coverage-timeline">
+    <svg viewBox={`0 0 ${W} ${H}`} width="100%" role="group" aria-label="Coverage timeline: script, B-roll and gaps" className="min-w-[700px] rounded-plank border border-timber-300 bg-white" data-testid="coverage-timeline">
       {ticks.map((t) => (
-        <g key={t}>
-          <line x1={x(t)} x2={x(t)} y1={14} y2={145} stroke="#e8d9bd" />
-          <text x={Math.min(x(t), W - 24)} y={11} fontSize="9" textAnchor="middle" fill="#6b5442" fontFamily="JetBrains Mono, monospace">
-            {formatTimecode(t, rate).slice(3, 8)}
+        <g key={t.frame}>
+          <line x1={x(t.frame)} x2={x(t.frame)} y1={14} y2={H - 5} stroke="#e8d9bd" />
+          <text x={Math.min(x(t.frame), W - 24)} y={11} fontSize="9" textAnchor="middle" fill="#6b5442" fontFamily="JetBrains Mono, monospace" data-testid="ruler-label">
+            {t.label}
           </text>
         </g>
       ))}
@@ -69,26 +69,25 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
           </rect>
         );
       })}
-      {data.gaps
-        .filter((g) => g.status === "open")
-        .map((g) => {
-          const t = `Gap ${g.startTimecode}–${g.endTimecode}: ${g.source === "marked" ? "marked by hand" : g.reason === "to_camera" ? "to camera too long without a cutaway" : "voice-over with no B-roll"}`;
-          return (
-            <g key={g.key}>
-              <rect {...focusable} x={x(g.startFrame)} y={rows.gaps} width={Math.max(2, x(g.endFrame) - x(g.startFrame))} height={18} fill="#fbeaec" stroke="#9b0d23" strokeWidth={1.5} strokeDasharray="4 2" onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)} data-testid="gap-block">
-                <title>{t}</title>
-              </rect>
-              <text x={x(g.startFrame) + 2} y={rows.gaps + 13} fontSize="10" fill="#9b0d23" pointerEvents="none">
-                !
-              </text>
-            </g>
-          );
-        })}
+      {openGaps.map((g, i) => {
+        const t = `Gap ${g.startTimecode}–${g.endTimecode}: ${g.source === "marked" ? "marked by hand" : g.reason === "to_camera" ? "to camera too long without a cutaway" : "voice-over with no B-roll"}${g.pickupShotId ? " (pickup shot planned)" : ""}`;
+        const y = rows.gaps + lanes[i]! * 22;
+        return (
+          <g key={g.key}>
+            <rect {...focusable} x={x(g.startFrame)} y={y} width={Math.max(2, x(g.endFrame) - x(g.startFrame))} height={18} fill="#fbeaec" stroke="#9b0d23" strokeWidth={1.5} strokeDasharray={g.pickupShotId ? "1 2" : "4 2"} onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)} data-testid="gap-block">
+              <title>{t}</title>
+            </rect>
+            <text x={x(g.startFrame) + 2} y={y + 13} fontSize="10" fill="#9b0d23" pointerEvents="none">
+              {g.pickupShotId ? "P" : "!"}
+            </text>
+          </g>
+        );
+      })}
     </svg>
   );
 }
 
-export function CoverageView({ episodeId, canManage, canShots, clips }: { episodeId: string; canManage: boolean; canShots: boolean; clips: { id: string; name: string; durationMs: number | null }[] }) {
+export function CoverageView({ episodeId, base, canManage, canShots, clips }: { episodeId: string; base: string; canManage: boolean; canShots: boolean; clips: { id: string; name: string; durationMs: number | null }[] }) {
   const qc = useQueryClient();
   const key = useMemo(() => ["coverage", episodeId], [episodeId]);
   const { data } = useQuery({ queryKey: key, queryFn: () => send(`/api/episodes/${episodeId}/coverage`, "GET") as Promise<CoverageDto> });
@@ -144,7 +143,7 @@ export function CoverageView({ episodeId, canManage, canShots, clips }: { episod
           <span className="inline-block h-3 w-5 bg-[#2f7a78]" aria-hidden /> B-roll
         </span>
         <span className="flex items-center gap-1">
-          <span className="inline-block h-3 w-5 border border-dashed border-[#9b0d23] bg-[#fbeaec]" aria-hidden /> gap (marked “!”)
+          <span className="inline-block h-3 w-5 border border-dashed border-[#9b0d23] bg-[#fbeaec]" aria-hidden /> gap (marked “!”, or “P” once a pickup shot is planned)
         </span>
       </div>
       {msg ? <Notice tone={msg.tone}>{msg.text}</Notice> : null}
@@ -225,10 +224,16 @@ export function CoverageView({ episodeId, canManage, canShots, clips }: { episod
                   {g.startTimecode}–{g.endTimecode}
                 </span>
                 <span className="text-xs text-walnut-700">{g.source === "marked" ? `marked${g.note ? `: ${g.note}` : ""}` : g.reason === "to_camera" ? "to camera without a cutaway" : "voice-over without B-roll"}</span>
-                <span className="rounded-plank border border-timber-300 px-1 text-xs">{g.status}</span>
+                <span className="rounded-plank border border-timber-300 px-1 text-xs" data-testid="gap-status">
+                  {g.status === "open" && g.pickupShotId ? "open · pickup planned" : g.status}
+                </span>
                 {canManage && g.status === "open" ? (
                   <span className="ml-auto flex gap-1">
-                    {canShots ? (
+                    {g.pickupShotId ? (
+                      <Link className="jb-tap rounded-plank border border-timber-300 px-3 py-1.5 hover:bg-timber-100" href={`${base}/shots`}>
+                        See the pickup shot
+                      </Link>
+                    ) : canShots ? (
                       <Button onClick={() => void act(() => send(`/api/episodes/${episodeId}/pickups`, "POST", g.id ? { gapId: g.id } : { startFrame: g.startFrame, endFrame: g.endFrame, segmentId: g.segmentId, reason: g.reason }), "Pickup shot added to the shot list.")}>Pickup shot</Button>
                     ) : null}
                     <Button variant="quiet" onClick={() => void setStatus("resolved")}>

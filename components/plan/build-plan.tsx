@@ -101,8 +101,9 @@ function StepItem({
             <span>
               Crew <span className="num text-walnut-900">{step.crewNeeded}</span>
             </span>
-            <span>
-              Starts after <span className="num text-walnut-900">{formatMinutes(step.timing.start)}</span>
+            <span title="Elapsed time from the start of the first step, counting the team's people; not a clock time">
+              Starts at <span className="num text-walnut-900">+{formatMinutes(step.crewTiming.start)}</span> elapsed
+              {step.crewTiming.crewDelayMinutes > 0 ? <span className="text-walnut-700"> (waits {formatMinutes(step.crewTiming.crewDelayMinutes)} for free hands)</span> : null}
             </span>
           </p>
           {step.notes ? <p className="whitespace-pre-wrap text-sm">{step.notes}</p> : null}
@@ -288,15 +289,18 @@ export function BuildPlan({ episodeId, tools, canEdit, canTime }: { episodeId: s
     move(ids.indexOf(String(active.id)), ids.indexOf(String(over.id)));
   };
   const critical = new Set(plan.timing.criticalPath);
-  const bars = plan.steps.map((s) => ({ id: s.id, label: `${s.position + 1}. ${s.title}`, ...s.timing, critical: critical.has(s.id), failed: s.status === "failed" }));
+  const bars = plan.steps.map((s) => ({ id: s.id, label: `${s.position + 1}. ${s.title}`, start: s.crewTiming.start, activeEnd: s.crewTiming.activeEnd, end: s.crewTiming.end, critical: critical.has(s.id), failed: s.status === "failed" }));
+  const team = plan.crew.team;
+  const overCrew = plan.steps.filter((s) => plan.crew.overCrew.includes(s.id));
 
   return (
     <div className="space-y-4">
-      <dl className="grid grid-cols-3 gap-2 sm:max-w-xl" data-testid="plan-totals">
+      <dl className="grid grid-cols-2 gap-2 sm:max-w-3xl sm:grid-cols-4" data-testid="plan-totals">
         {[
           ["Hands-on in total", plan.timing.totalActiveMinutes],
           ["Waits in total", plan.timing.totalWaitMinutes],
           ["Longest chain", plan.timing.criticalPathMinutes],
+          [`With ${team} ${team === 1 ? "person" : "people"}`, plan.crew.finishMinutes],
         ].map(([label, v]) => (
           <div key={label as string} className="rounded-plank border border-timber-300 bg-white p-2">
             <dt className="text-xs text-walnut-600">{label}</dt>
@@ -309,7 +313,15 @@ export function BuildPlan({ episodeId, tools, canEdit, canTime }: { episodeId: s
           The longest chain of steps and waits runs {formatMinutes(plan.timing.criticalPathMinutes)}; plan the shoot over several days.
         </p>
       ) : null}
-      <PlanTimeline bars={bars} total={plan.timing.criticalPathMinutes} />
+      <p className="text-sm text-walnut-700" data-testid="plan-time-note">
+        Times here are elapsed time from the start of the first step, one duration after another, with hands-on time shared among the channel&apos;s {team} {team === 1 ? "person" : "people"}. They are not clock times and not a shoot schedule: nights, days off and crew availability come with shoot days.
+      </p>
+      {overCrew.length ? (
+        <Notice tone="info">
+          {overCrew.map((s) => `“${s.title}” needs ${s.crewNeeded} people`).join("; ")}, but the channel has {team}. It is timed as if everyone were enough; bring in a helper or split the step.
+        </Notice>
+      ) : null}
+      <PlanTimeline bars={bars} total={plan.crew.finishMinutes} />
 
       <p role="status" aria-live="polite" className="sr-only">
         {status}

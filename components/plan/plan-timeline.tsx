@@ -28,8 +28,13 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
   const ticks = Array.from({ length: Math.floor(span / tickStep) + 1 }, (_, i) => i * tickStep);
   const height = top + bars.length * rowH + 8;
   return (
-    <figure className="overflow-x-auto rounded-plank border border-timber-300 bg-white p-2">
-      <svg viewBox={`0 0 ${width} ${height}`} width="100%" role="img" aria-label={`Build timeline: ${bars.length} steps over ${formatMinutes(total)}.`} className="min-w-[640px]">
+    <figure className="rounded-plank border border-timber-300 bg-white p-2">
+      <p className="mb-1 text-xs text-walnut-700 sm:hidden" aria-hidden>
+        Swipe sideways to see the whole timeline →
+      </p>
+      {/* Focusable so keyboard users can scroll it too (WCAG 2.1.1). */}
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Build timeline, scrolls sideways">
+      <svg viewBox={`0 0 ${width} ${height}`} width="100%" role="img" aria-label={`Build timeline: ${bars.length} steps over ${formatMinutes(total)} elapsed, not clock times.`} className="min-w-[640px]">
         <defs>
           <pattern id="wait-hatch" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
             <rect width="6" height="6" fill="#f4ecdc" />
@@ -40,7 +45,7 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
           <g key={t}>
             <line x1={x(t)} x2={x(t)} y1={top - 6} y2={height - 4} stroke="#e8d9bd" />
             <text x={x(t)} y={top - 10} fontSize="10" textAnchor="middle" fill="#6b5442" fontFamily="JetBrains Mono, monospace">
-              {tickStep >= day ? `day ${t / day + 1}` : formatMinutes(t)}
+              {t === 0 ? "start" : `+${formatMinutes(t)}`}
             </text>
           </g>
         ))}
@@ -65,6 +70,7 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
           );
         })}
       </svg>
+      </div>
       <figcaption className="mt-1 flex flex-wrap gap-4 text-xs text-walnut-700">
         <span className="flex items-center gap-1">
           <span className="inline-block h-3 w-5 bg-chalk-600" aria-hidden /> hands-on time
@@ -81,6 +87,7 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
         <span className="flex items-center gap-1">
           <span className="inline-block h-3 w-5 bg-[#9b0d23]" aria-hidden /> failed step
         </span>
+        <span>Axis: elapsed time from the first step, not clock time.</span>
       </figcaption>
     </figure>
   );

@@ -7,6 +7,7 @@ import { COVERAGE_KINDS, COVERAGE_LABELS } from "@/lib/shot-kinds";
 import { CAUTIONS, HAZARDS } from "@/lib/safety";
 import { TextField, Notice, SelectField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
+import { Checkbox } from "@/components/ui/checkbox";
 import type { PlanStepDto, ToolDto } from "./types";
 
 const WAIT_UNITS = { minutes: 1, hours: 60, days: 1440 } as const;
@@ -139,7 +140,7 @@ export function StepForm({
             <div className="mt-1 flex flex-wrap gap-x-3 gap-y-1">
               {COVERAGE_KINDS.map((k) => (
                 <label key={k} className="flex items-center gap-1 text-sm">
-                  <input type="checkbox" value={k} className="accent-chalk-600" {...register("coverageKinds")} />
+                  <Checkbox value={k} {...register("coverageKinds")} />
                   {COVERAGE_LABELS[k]}
                 </label>
               ))}
@@ -150,7 +151,7 @@ export function StepForm({
             <div className="mt-1 flex flex-wrap gap-x-3 gap-y-1">
               {HAZARDS.map((h) => (
                 <label key={h} className="flex items-center gap-1 text-sm">
-                  <input type="checkbox" value={h} className="accent-chalk-600" {...register("hazards")} />
+                  <Checkbox value={h} {...register("hazards")} />
                   {CAUTIONS[h].title}
                 </label>
               ))}
@@ -162,7 +163,7 @@ export function StepForm({
             <div className="mt-1 max-h-40 space-y-0.5 overflow-y-auto">
               {others.map((s) => (
                 <label key={s.id} className="flex items-center gap-1 text-sm">
-                  <input type="checkbox" value={s.id} className="accent-chalk-600" {...register("dependsOn")} />
+                  <Checkbox value={s.id} {...register("dependsOn")} />
                   <span className="num text-walnut-600">{s.position + 1}.</span> {s.title}
                 </label>
               ))}
@@ -175,7 +176,7 @@ export function StepForm({
             <div className="mt-1 max-h-40 space-y-0.5 overflow-y-auto">
               {tools.map((t) => (
                 <label key={t.id} className="flex items-center gap-1 text-sm">
-                  <input type="checkbox" value={t.id} className="accent-chalk-600" {...register("toolIds")} />
+                  <Checkbox value={t.id} {...register("toolIds")} />
                   {t.name}
                   {t.sponsored ? <span className="text-xs text-walnut-600">(from a sponsor)</span> : null}
                 </label>

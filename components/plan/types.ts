@@ -21,6 +21,8 @@ export interface PlanStepDto {
   failurePhotoUrl: string | null;
   remedyOfStepId: string | null;
   timing: { start: number; activeEnd: number; end: number };
+  /** The same chain with hands-on time counted against the team's people. */
+  crewTiming: { start: number; activeEnd: number; end: number; crewDelayMinutes: number };
 }
 
 export interface ToolDto {
@@ -37,6 +39,7 @@ export interface PlanDto {
   steps: PlanStepDto[];
   timing: { totalActiveMinutes: number; totalWaitMinutes: number; criticalPathMinutes: number; criticalPath: string[] };
   toolsUsed: (ToolDto & { steps: string[] })[];
+  crew: { team: number; finishMinutes: number; overCrew: string[] };
 }
 
 export function api<T>(url: string, init?: { method?: string; json?: unknown; body?: BodyInit | null }): Promise<T> {

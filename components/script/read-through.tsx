@@ -67,7 +67,7 @@ export function ReadThrough({ items, wpm }: { items: Item[]; wpm: number }) {
             }}
             aria-current={i === current ? "step" : undefined}
             onClick={() => setCurrent(i)}
-            className={`cursor-pointer rounded-plank px-4 py-3 transition-colors ${i === current ? "bg-white ring-4 ring-chalk-600" : "opacity-45"}`}
+            className={`cursor-pointer rounded-plank px-4 py-3 transition-colors ${i === current ? "bg-white ring-4 ring-chalk-600" : "text-walnut-600"}`}
             data-testid="read-item"
           >
             <p className="num text-sm text-walnut-600">

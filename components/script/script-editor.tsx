@@ -182,7 +182,7 @@ export function ScriptEditor(p: Props) {
 
   return (
     <div className="space-y-4">
-      <div className="sticky top-0 z-10 -mx-1 flex flex-wrap items-center gap-x-5 gap-y-1 border-b border-timber-300 bg-timber-50/95 px-1 py-2 text-sm" data-testid="script-summary">
+      <div className="sticky top-0 z-10 -mx-1 flex flex-wrap items-center gap-x-5 gap-y-1 border-b border-timber-300 bg-timber-50 px-1 py-2 text-sm shadow-[0_4px_6px_-4px_rgb(42_28_18_/0.25)]" data-testid="script-summary">
         <span>
           Runtime <span className="num text-base font-bold">{formatTimecode(t.totalFrames, rate)}</span>
         </span>

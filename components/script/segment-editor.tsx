@@ -1,4 +1,5 @@
 "use client";
+import { CheckboxLabel } from "@/components/ui/checkbox";
 import { forwardRef, useCallback, useEffect, useImperativeHandle, useRef, useState } from "react";
 import { useSortable } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
@@ -198,86 +199,102 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
         </p>
       </div>
       <div className="min-w-0 space-y-2">
+        {canWrite ? (
         <div className="flex flex-wrap items-center gap-2 text-sm">
-          <select aria-label="Segment kind" disabled={!canWrite} className="rounded-plank border border-timber-300 bg-white px-1 py-0.5" value={base.kind} onChange={(e) => void save({ kind: e.target.value as SegmentDto["kind"] })}>
-            {SEGMENT_KINDS.map((k) => (
-              <option key={k} value={k}>
-                {SEGMENT_KIND_LABELS[k]}
-              </option>
-            ))}
-          </select>
-          <select aria-label="Build step" disabled={!canWrite} className="max-w-56 rounded-plank border border-timber-300 bg-white px-1 py-0.5" value={base.stepId ?? ""} onChange={(e) => void save({ stepId: e.target.value || null })}>
-            <option value="">No build step</option>
-            {steps.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.title}
-              </option>
-            ))}
-          </select>
-          <label className="flex items-center gap-1">
-            <span className="text-walnut-700">Pin at</span>
-            <input
-              aria-label="Pinned start timecode"
-              disabled={!canWrite}
-              className="num w-32 rounded-plank border border-timber-300 px-1 py-0.5"
-              placeholder={rate.dropFrame ? "00:00:00;00" : "00:00:00:00"}
-              value={pinText}
-              onChange={(e) => setPinText(e.target.value)}
-              onBlur={() => {
-                const v = pinText.trim();
-                if (!v) {
-                  if (base.pinnedStartFrame != null) void save({ pinnedStartFrame: null });
-                  return;
-                }
-                const p = parseTimecode(v, rate);
-                if (!p.ok) return setFieldError(`Pin: ${p.message}`);
-                setPinText(formatTimecode(p.frames, rate));
-                if (p.frames !== base.pinnedStartFrame) void save({ pinnedStartFrame: p.frames });
-              }}
-            />
-          </label>
-          <label className="flex items-center gap-1">
-            <span className="text-walnut-700">Fixed length (s)</span>
-            <input
-              aria-label="Fixed length in seconds"
-              disabled={!canWrite}
-              inputMode="decimal"
-              className="num w-16 rounded-plank border border-timber-300 px-1 py-0.5"
-              defaultValue={base.explicitDurationFrames != null ? secs(base.explicitDurationFrames, rate) : ""}
-              onBlur={(e) => {
-                const v = e.target.value.trim();
-                if (!v) return void (base.explicitDurationFrames != null && save({ explicitDurationFrames: null }));
-                const n = Number(v);
-                if (!Number.isFinite(n) || n < 0) return setFieldError("Fixed length: enter seconds, e.g. 4.5");
-                void save({ explicitDurationFrames: msToFrames(n * 1000, rate) });
-              }}
-            />
-          </label>
-        </div>
+            <select aria-label="Segment kind" disabled={!canWrite} className="rounded-plank border border-timber-300 bg-white px-1 py-0.5" value={base.kind} onChange={(e) => void save({ kind: e.target.value as SegmentDto["kind"] })}>
+              {SEGMENT_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {SEGMENT_KIND_LABELS[k]}
+                </option>
+              ))}
+            </select>
+            <select aria-label="Build step" disabled={!canWrite} className="max-w-56 rounded-plank border border-timber-300 bg-white px-1 py-0.5" value={base.stepId ?? ""} onChange={(e) => void save({ stepId: e.target.value || null })}>
+              <option value="">No build step</option>
+              {steps.map((s) => (
+                <option key={s.id} value={s.id}>
+                  {s.title}
+                </option>
+              ))}
+            </select>
+            <label className="flex items-center gap-1">
+              <span className="text-walnut-700">Pin at</span>
+              <input
+                aria-label="Pinned start timecode"
+                disabled={!canWrite}
+                className="num w-32 rounded-plank border border-timber-300 px-1 py-0.5"
+                placeholder={rate.dropFrame ? "00:00:00;00" : "00:00:00:00"}
+                value={pinText}
+                onChange={(e) => setPinText(e.target.value)}
+                onBlur={() => {
+                  const v = pinText.trim();
+                  if (!v) {
+                    if (base.pinnedStartFrame != null) void save({ pinnedStartFrame: null });
+                    return;
+                  }
+                  const p = parseTimecode(v, rate);
+                  if (!p.ok) return setFieldError(`Pin: ${p.message}`);
+                  setPinText(formatTimecode(p.frames, rate));
+                  if (p.frames !== base.pinnedStartFrame) void save({ pinnedStartFrame: p.frames });
+                }}
+              />
+            </label>
+            <label className="flex items-center gap-1">
+              <span className="text-walnut-700">Fixed length (s)</span>
+              <input
+                aria-label="Fixed length in seconds"
+                disabled={!canWrite}
+                inputMode="decimal"
+                className="num w-16 rounded-plank border border-timber-300 px-1 py-0.5"
+                defaultValue={base.explicitDurationFrames != null ? secs(base.explicitDurationFrames, rate) : ""}
+                onBlur={(e) => {
+                  const v = e.target.value.trim();
+                  if (!v) return void (base.explicitDurationFrames != null && save({ explicitDurationFrames: null }));
+                  const n = Number(v);
+                  if (!Number.isFinite(n) || n < 0) return setFieldError("Fixed length: enter seconds, e.g. 4.5");
+                  void save({ explicitDurationFrames: msToFrames(n * 1000, rate) });
+                }}
+              />
+            </label>
+          </div>
+        ) : (
+          // Roles that cannot edit the words read them as text, not as greyed-out controls.
+          <p className="flex flex-wrap gap-x-3 text-sm text-walnut-700" data-testid="segment-facts">
+            <span>{SEGMENT_KIND_LABELS[base.kind]}</span>
+            {base.stepId ? <span>Step: {steps.find((s) => s.id === base.stepId)?.title ?? "a removed step"}</span> : null}
+            {base.pinnedStartFrame != null ? <span className="num">Pinned at {formatTimecode(base.pinnedStartFrame, rate)}</span> : null}
+            {base.explicitDurationFrames != null ? <span className="num">Fixed length {secs(base.explicitDurationFrames, rate)} s</span> : null}
+          </p>
+        )}
+        {canWrite ? (
         <textarea
-          ref={area}
-          aria-label={`Segment ${index + 1} text`}
-          readOnly={!canWrite}
-          value={text}
-          rows={Math.max(2, Math.ceil(text.length / 90))}
-          className="w-full resize-y rounded-plank border border-timber-200 bg-timber-50/40 px-2 py-1.5 text-[15px] leading-relaxed focus:bg-white"
-          onChange={(e) => onChange(e.target.value)}
-          onBlur={() => void flushText()}
-          onKeyDown={(e) => {
-            if (!canWrite) return;
-            const el = e.currentTarget;
-            if ((e.ctrlKey || e.metaKey) && e.key === "Enter") {
-              e.preventDefault();
-              props.onSplit(segment.id, el.value.slice(0, el.selectionStart), el.value.slice(el.selectionEnd));
-            } else if (e.key === "Backspace" && el.selectionStart === 0 && el.selectionEnd === 0 && index > 0) {
-              e.preventDefault();
-              props.onJoinPrevious(segment.id);
-            } else if (e.altKey && (e.key === "ArrowUp" || e.key === "ArrowDown")) {
-              e.preventDefault();
-              props.onMove(segment.id, e.key === "ArrowUp" ? -1 : 1);
-            }
-          }}
-        />
+            ref={area}
+            aria-label={`Segment ${index + 1} text`}
+            readOnly={!canWrite}
+            value={text}
+            rows={Math.max(2, Math.ceil(text.length / 90))}
+            className="w-full resize-y rounded-plank border border-timber-200 bg-timber-50/40 px-2 py-1.5 text-[15px] leading-relaxed focus:bg-white"
+            onChange={(e) => onChange(e.target.value)}
+            onBlur={() => void flushText()}
+            onKeyDown={(e) => {
+              if (!canWrite) return;
+              const el = e.currentTarget;
+              if ((e.ctrlKey || e.metaKey) && e.key === "Enter") {
+                e.preventDefault();
+                props.onSplit(segment.id, el.value.slice(0, el.selectionStart), el.value.slice(el.selectionEnd));
+              } else if (e.key === "Backspace" && el.selectionStart === 0 && el.selectionEnd === 0 && index > 0) {
+                e.preventDefault();
+                props.onJoinPrevious(segment.id);
+              } else if (e.altKey && (e.key === "ArrowUp" || e.key === "ArrowDown")) {
+                e.preventDefault();
+                props.onMove(segment.id, e.key === "ArrowUp" ? -1 : 1);
+              }
+            }}
+          />
+        ) : (
+          <p className="whitespace-pre-wrap rounded-plank border border-timber-200 bg-white px-2 py-1.5 text-[15px] leading-relaxed" aria-label={`Segment ${index + 1} text`} data-testid="segment-text">
+            {text || <span className="text-walnut-600">(no words yet)</span>}
+          </p>
+        )}
         {fieldError ? (
           <p role="alert" className="text-sm text-[#9b0d23]">
             {fieldError}
@@ -318,11 +335,12 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
           </div>
         ) : null}
         <div className="flex flex-wrap items-center gap-3 text-sm">
-          <label className="flex items-center gap-1">
-            <input type="checkbox" className="accent-chalk-600" disabled={!canAnnotate} checked={base.chapterStart} onChange={(e) => void save({ chapterStart: e.target.checked })} />
-            Chapter starts here
-          </label>
-          {base.chapterStart ? (
+          {canAnnotate ? (
+            <CheckboxLabel label="Chapter starts here" checked={base.chapterStart} onChange={(e) => void save({ chapterStart: e.target.checked })} />
+          ) : base.chapterStart ? (
+            <span className="font-medium">Chapter: {base.chapterTitle || "(untitled)"}</span>
+          ) : null}
+          {base.chapterStart && canAnnotate ? (
             <input
               aria-label="Chapter title"
               disabled={!canAnnotate}
@@ -338,15 +356,18 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
             </span>
           ))}
         </div>
-        <label className="block text-xs text-walnut-700">
-          Note to the editor
-          <input
-            className="mt-0.5 block w-full rounded-plank border border-timber-200 px-1 py-0.5 text-sm"
-            disabled={!canAnnotate}
-            defaultValue={base.editorNotes}
-            onBlur={(e) => e.target.value !== base.editorNotes && void save({ editorNotes: e.target.value })}
-          />
-        </label>
+        {canAnnotate ? (
+          <label className="block text-xs text-walnut-700">
+            Note to the editor
+            <input
+              className="mt-0.5 block w-full rounded-plank border border-timber-200 px-1 py-0.5 text-sm"
+              defaultValue={base.editorNotes}
+              onBlur={(e) => e.target.value !== base.editorNotes && void save({ editorNotes: e.target.value })}
+            />
+          </label>
+        ) : base.editorNotes ? (
+          <p className="text-xs text-walnut-700">Note to the editor: {base.editorNotes}</p>
+        ) : null}
         {canWrite ? (
           <div className="flex flex-wrap gap-2 text-xs">
             <button type="button" className="rounded-plank border border-timber-300 px-2 py-0.5 hover:bg-timber-100" onClick={() => props.onInsertAfter(segment.id)}>

@@ -65,8 +65,16 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
         ? [
             col.display({
               id: "select",
-              header: ({ table }) => <Checkbox aria-label="Select all shots" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />,
-              cell: ({ row }) => <Checkbox aria-label={`Select ${row.original.description}`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />,
+              header: ({ table }) => (
+                <label className="jb-tap inline-flex items-center justify-center">
+                  <Checkbox aria-label="Select all shots" checked={table.getIsAllRowsSelected()} onChange={table.getToggleAllRowsSelectedHandler()} />
+                </label>
+              ),
+              cell: ({ row }) => (
+                <label className="jb-tap inline-flex items-center justify-center">
+                  <Checkbox aria-label={`Select ${row.original.description}`} checked={row.getIsSelected()} onChange={row.getToggleSelectedHandler()} />
+                </label>
+              ),
             }),
           ]
         : []),

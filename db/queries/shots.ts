@@ -101,9 +101,21 @@ export async function createPickup({
   kind: string;
 }) {
   return db().transaction(async (tx) => {
+    // Under the episode lock, so two clicks on the same gap cannot both make a pickup.
     await touchEpisode(tx, episodeId);
     let gapId = gap.id;
     if (!gapId) {
+      const [kept] = await tx
+        .select({ id: gaps.id })
+        .from(gaps)
+        .where(and(eq(gaps.episodeId, episodeId), eq(gaps.source, "computed"), eq(gaps.startFrame, gap.startFrame), eq(gaps.endFrame, gap.endFrame)))
+        .limit(1);
+      gapId = kept?.id;
+    }
+    if (gapId) {
+      const [already] = await tx.select().from(shots).where(and(eq(shots.episodeId, episodeId), eq(shots.gapId, gapId))).limit(1);
+      if (already) return { duplicate: already };
+    } else {
       const [g] = await tx
         .insert(gaps)
         .values({ episodeId, startFrame: gap.startFrame, endFrame: gap.endFrame, segmentId: gap.segmentId, source: "computed", reason: gap.reason, status: "open", note: gap.note ?? "" })

@@ -7,7 +7,7 @@ import type { Channel, CoverageRange, Episode, Gap } from "../../db/schema";
 import type { scriptView } from "./script-view";
 
 
-export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs" | "toCameraMaxMs">, view: ReturnType<typeof scriptView>, ranges: CoverageRange[], stored: Gap[]) {
+export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs" | "toCameraMaxMs">, view: ReturnType<typeof scriptView>, ranges: CoverageRange[], stored: Gap[], pickups: Map<string, string> = new Map()) {
   const rate = rateOf(view.rate.id as Episode["frameRate"], view.rate.dropFrame);
   const thresholds = { voiceOverGapFrames: msToFrames(channel.brollGapMs, rate), toCameraMaxFrames: msToFrames(channel.toCameraMaxMs, rate) };
   const segments = view.segments.map((s) => ({ id: s.id, kind: s.kind, start: s.timing.start, end: s.timing.end }));
@@ -28,11 +28,12 @@ export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs"
       endTimecode: tc(c.end),
       segmentId: c.segmentId,
       note: keep?.note ?? "",
+      pickupShotId: keep ? (pickups.get(keep.id) ?? null) : null,
     };
   });
   const marked: GapView[] = stored
     .filter((g) => g.source === "marked")
-    .map((g) => ({ id: g.id, key: g.id, source: "marked", reason: null, status: g.status as GapView["status"], startFrame: g.startFrame, endFrame: g.endFrame, startTimecode: tc(g.startFrame), endTimecode: tc(g.endFrame), segmentId: g.segmentId, note: g.note }));
+    .map((g) => ({ id: g.id, key: g.id, source: "marked", reason: null, status: g.status as GapView["status"], startFrame: g.startFrame, endFrame: g.endFrame, startTimecode: tc(g.startFrame), endTimecode: tc(g.endFrame), segmentId: g.segmentId, note: g.note, pickupShotId: pickups.get(g.id) ?? null }));
   const gaps = [...computed, ...marked].sort((a, b) => a.startFrame - b.startFrame);
   return {
     thresholds,

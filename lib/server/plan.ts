@@ -1,6 +1,6 @@
 import "server-only";
 /** Shared checks and views for build-plan routes. */
-import { findCycle, planTiming } from "../build-plan";
+import { crewTiming, findCycle, planTiming } from "../build-plan";
 import { stepHazards } from "../safety";
 import { isSponsoredAcquisition, TIMING_FIELDS, type StepUpdate } from "../schemas/build";
 import type { ChannelAccess } from "./access";
@@ -43,9 +43,12 @@ export function assertStepPatchAllowed(access: ChannelAccess, patch: StepUpdate)
   assertCan(access, timingOnly ? "build.timing" : "build.edit");
 }
 
-export async function planView(steps: StepWithLinks[], shelf: Tool[]) {
+/** `team` is how many people the channel has: hands-on time is counted against it. */
+export async function planView(steps: StepWithLinks[], shelf: Tool[], team: number) {
   const toolById = new Map(shelf.map((t) => [t.id, t]));
-  const timing = planTiming(steps.map((s) => ({ id: s.id, activeMinutes: s.activeMinutes, waitMinutes: s.waitMinutes, dependsOn: s.dependsOn, status: s.status })));
+  const input = steps.map((s) => ({ id: s.id, activeMinutes: s.activeMinutes, waitMinutes: s.waitMinutes, dependsOn: s.dependsOn, status: s.status, crewNeeded: s.crewNeeded }));
+  const timing = planTiming(input);
+  const counted = crewTiming(input, team);
   const out = await Promise.all(
     steps.map(async (s) => ({
       id: s.id,
@@ -66,6 +69,7 @@ export async function planView(steps: StepWithLinks[], shelf: Tool[]) {
       failurePhotoUrl: s.failurePhotoKey ? await presignGet(s.failurePhotoKey) : null,
       remedyOfStepId: s.remedyOfStepId,
       timing: timing.steps[s.id]!,
+      crewTiming: counted.steps[s.id]!,
     })),
   );
   const used = new Map<string, string[]>();
@@ -77,6 +81,7 @@ export async function planView(steps: StepWithLinks[], shelf: Tool[]) {
   return {
     steps: out,
     timing: { totalActiveMinutes: timing.totalActiveMinutes, totalWaitMinutes: timing.totalWaitMinutes, criticalPathMinutes: timing.criticalPathMinutes, criticalPath: timing.criticalPath },
+    crew: { team, finishMinutes: counted.finishMinutes, overCrew: counted.overCrew },
     toolsUsed,
   };
 }

@@ -68,11 +68,13 @@ for (const w of WIDTHS) {
         await page.waitForLoadState("networkidle");
         const small = await page.evaluate(() =>
           [...document.querySelectorAll<HTMLElement>("header a, header button, main button, main select, main input:not([type=hidden]):not(.sr-only)")]
-            .filter((el) => {
-              const r = el.getBoundingClientRect();
+            // A checkbox or radio inside its label is tapped through the whole label.
+            .map((el) => ({ el, target: (el.matches("input[type=checkbox], input[type=radio]") && el.closest("label")) || el }))
+            .filter(({ el, target }) => {
+              const r = target.getBoundingClientRect();
               return r.width > 0 && r.height > 0 && getComputedStyle(el).visibility !== "hidden" && (r.height < 44 || r.width < 44);
             })
-            .map((el) => `${el.tagName.toLowerCase()} "${(el.getAttribute("aria-label") ?? el.textContent ?? "").trim().slice(0, 40)}" ${Math.round(el.getBoundingClientRect().width)}×${Math.round(el.getBoundingClientRect().height)}`),
+            .map(({ el, target }) => `${el.tagName.toLowerCase()} "${(el.getAttribute("aria-label") ?? el.textContent ?? "").trim().slice(0, 40)}" ${Math.round(target.getBoundingClientRect().width)}×${Math.round(target.getBoundingClientRect().height)}`),
         );
         for (const s of small) found.push(`${url}: target under 44 px: ${s}`);
       }

@@ -17,6 +17,9 @@ test("presenter creates an episode, moves it by keyboard and by menu, and it per
   await form.getByRole("button", { name: "Add episode" }).click();
   await expect(board.column("Sketchbook").getByTestId("episode-card").filter({ hasText: title })).toBeVisible();
   await expect(board.card(title)).toContainText("12:30");
+  // Sighted users see the new episode named, with a way to open it.
+  await expect(page.getByTestId("board-added")).toContainText(`Added “${title}” to 1 · Sketchbook`);
+  await expect(page.getByTestId("board-added").getByRole("link", { name: "Open it to plan the build" })).toBeVisible();
 
   // Keyboard drag: pick up with space, arrow to the next stage, drop with space.
   const handle = board.card(title).getByRole("button", { name: new RegExp(`^Drag ${title}`) });

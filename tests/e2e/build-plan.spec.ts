@@ -52,6 +52,9 @@ test("presenter plans a build, a step fails, a remedy follows, and the timeline 
   await remedy.getByLabel("Wait unit").selectOption("days");
   await remedy.getByRole("button", { name: "Add remedy step" }).click();
 
+  // The timeline says what it is: elapsed durations with the team's people counted, not a schedule.
+  await expect(page.getByTestId("plan-time-note")).toContainText("not clock times and not a shoot schedule");
+  await expect(page.getByTestId("plan-totals")).toContainText(/With \d+ people/);
   const titles = page.getByTestId("build-step").locator("h3");
   await expect(titles).toHaveText(["Mill the stock", "Glue up the top", "Re-glue with cauls", "Oil finish"]);
   await expect(page.locator('[data-step-title="Re-glue with cauls"]')).toContainText("Remedy for “Glue up the top”");

@@ -60,6 +60,10 @@ test("editor uploads footage in parts with pause and resume, lays it as B-roll a
   await expect(page.getByTestId("gap-item").first()).toContainText("00:00:04:00–00:00:10:00");
   await page.getByTestId("gap-item").first().getByRole("button", { name: "Pickup shot" }).click();
   await expect(page.getByText("Pickup shot added to the shot list.")).toBeVisible();
+  // The gap now says a pickup is planned, and offers no second one.
+  await expect(page.getByTestId("gap-item").first().getByTestId("gap-status")).toHaveText("open · pickup planned");
+  await expect(page.getByTestId("gap-item").first().getByRole("button", { name: "Pickup shot" })).toHaveCount(0);
+  await expect(page.getByTestId("gap-item").first().getByRole("link", { name: "See the pickup shot" })).toBeVisible();
   await page.getByTestId("broll-range").first().focus();
   await expect(page.getByTestId("timeline-focus")).toContainText("B-roll 00:00:00:00–00:00:04:00");
   await shot(page, "coverage-with-gap");

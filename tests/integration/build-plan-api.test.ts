@@ -82,6 +82,9 @@ describe("dependencies and timing", () => {
     const p = await plan(ep);
     expect(p.timing).toMatchObject({ totalActiveMinutes: 300, totalWaitMinutes: 1440, criticalPathMinutes: 90 + 30 + 1440 + 60, criticalPath: [a, b, d] });
     expect(p.steps.find((s: { id: string }) => s.id === d).timing.start).toBe(1560);
+    // The test channel has five people, so each step needing one never waits for hands.
+    expect(p.crew).toMatchObject({ team: 5, finishMinutes: 1620, overCrew: [] });
+    expect(p.steps.find((s: { id: string }) => s.id === c).crewTiming).toMatchObject({ start: 90, crewDelayMinutes: 0 });
   });
 
   it("refuses a loop with 409, names it, and writes nothing", async () => {

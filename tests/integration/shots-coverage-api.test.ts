@@ -102,6 +102,15 @@ describe("coverage and gaps", () => {
     expect(pick.json.shot).toMatchObject({ kind: "pickup", segmentId: vo.id, gapId: pick.json.gapId, status: "planned" });
     c = await cov();
     expect(c.gaps[0].id).toBe(pick.json.gapId);
+    expect(c.gaps[0]).toMatchObject({ status: "open", pickupShotId: pick.json.shot.id });
+    // A second pickup for the same gap, by its id or by its frames (a stale page), is refused and makes nothing.
+    const again = await Promise.all([
+      call(pickupsRoute.POST as never, { method: "POST", params: { episodeId: ep }, body: { gapId: pick.json.gapId }, user: w.members.editor }),
+      call(pickupsRoute.POST as never, { method: "POST", params: { episodeId: ep }, body: { startFrame: 100, endFrame: 250, segmentId: vo.id, reason: "voice_over" }, user: w.members.editor }),
+    ]);
+    expect(again.map((r) => r.status)).toEqual([409, 409]);
+    expect(again[0]!.json.error.code).toBe("conflict:gap.pickup");
+    expect((await db().select().from(gaps).where(eq(gaps.episodeId, ep))).length).toBe(1);
 
     // Covering the rest closes it: the kept gap is resolved.
     await call(rangesRoute.POST as never, { method: "POST", params: { episodeId: ep }, body: { startFrame: 90, endFrame: 260 }, user: w.members.editor });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { findCycle, formatMinutes, planTiming, type PlanStep } from "@/lib/build-plan";
+import { crewTiming, findCycle, formatMinutes, planTiming, type CrewStep, type PlanStep } from "@/lib/build-plan";
 
 /** Reference: the longest path found by trying every path in the graph. */
 function bruteForceLongest(steps: PlanStep[]): number {
@@ -72,5 +72,58 @@ describe("build plan timing", () => {
     expect(findCycle([{ id: "a", dependsOn: ["a"] }])).toEqual(["a"]);
     expect(findCycle([{ id: "a", dependsOn: [] }, { id: "b", dependsOn: ["a"] }])).toBeNull();
     expect(() => planTiming(steps.map((s) => ({ ...s, activeMinutes: 1, waitMinutes: 0 })))).toThrow(/cycle/);
+  });
+});
+
+describe("build plan timing with crew counted", () => {
+  const withCrew = dag.chain((steps) => fc.tuple(fc.constant(steps), fc.array(fc.integer({ min: 0, max: 3 }), { minLength: steps.length, maxLength: steps.length }), fc.integer({ min: 1, max: 3 })));
+
+  it("keeps every dependency and wait, and never needs more people than the team at once (fast-check)", () => {
+    fc.assert(
+      fc.property(withCrew, ([base, needs, team]) => {
+        const steps: CrewStep[] = base.map((s, i) => ({ ...s, crewNeeded: needs[i]! }));
+        const t = crewTiming(steps, team);
+        for (const s of steps) {
+          for (const d of s.dependsOn) expect(t.steps[s.id]!.start).toBeGreaterThanOrEqual(t.steps[d]!.end);
+        }
+        // Resource check by sweeping every moment a step starts: the people busy then.
+        const busy = steps.filter((s) => t.steps[s.id]!.activeEnd > t.steps[s.id]!.start);
+        for (const p of busy) {
+          const x = t.steps[p.id]!.start;
+          const people = busy.filter((q) => t.steps[q.id]!.start <= x && x < t.steps[q.id]!.activeEnd).reduce((a, q) => a + Math.min(team, q.crewNeeded), 0);
+          expect(people).toBeLessThanOrEqual(team);
+        }
+        expect(t.finishMinutes).toBeGreaterThanOrEqual(planTiming(steps).criticalPathMinutes);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it("with people enough for everything, equals the plain chain of durations (fast-check)", () => {
+    fc.assert(
+      fc.property(dag, (base) => {
+        const steps: CrewStep[] = base.map((s) => ({ ...s, crewNeeded: 1 }));
+        const t = crewTiming(steps, steps.length);
+        const plain = planTiming(steps);
+        for (const s of steps) expect(t.steps[s.id]!.start).toBe(plain.steps[s.id]!.start);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it("one person cannot sand the legs while gluing the top; glue curing needs nobody", () => {
+    // Worked by hand: with one person the 120 min of legs waits for the 30 min glue-up, then runs during the cure.
+    const steps: CrewStep[] = [
+      { id: "glue", activeMinutes: 30, waitMinutes: 24 * 60, dependsOn: [], crewNeeded: 1 },
+      { id: "legs", activeMinutes: 120, waitMinutes: 0, dependsOn: [], crewNeeded: 1 },
+      { id: "assemble", activeMinutes: 60, waitMinutes: 0, dependsOn: ["glue", "legs"], crewNeeded: 2 },
+    ];
+    const one = crewTiming(steps, 1);
+    expect(one.steps.legs).toMatchObject({ start: 30, activeEnd: 150, crewDelayMinutes: 30 });
+    expect(one.steps.assemble!.start).toBe(30 + 1440);
+    expect(one.overCrew).toEqual(["assemble"]);
+    const two = crewTiming(steps, 2);
+    expect(two.steps.legs!.start).toBe(0);
+    expect(two.overCrew).toEqual([]);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { computeCoverage, intersect, subtract, union, type Interval } from "@/lib/coverage";
+import { computeCoverage, intersect, packLanes, subtract, union, type Interval } from "@/lib/coverage";
 
 /** Reference: mark every frame, then read the runs back (brute force). */
 function frames(xs: Interval[], size: number): boolean[] {
@@ -78,5 +78,24 @@ describe("interval arithmetic against a frame-by-frame reference (fast-check)", 
     const r = computeCoverage(segs, [{ start: 0, end: 100 }, { start: 175, end: 250 }], { voiceOverGapFrames: 50, toCameraMaxFrames: 500 });
     expect(r.gaps).toEqual([{ start: 100, end: 175, reason: "voice_over", segmentId: "a" }]);
     expect(r.coverage).toBeCloseTo(175 / 250, 9);
+  });
+});
+
+describe("gap lanes", () => {
+  it("never overlap within a lane and use as many lanes as the deepest overlap (fast-check, brute force)", () => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.nat(200), fc.integer({ min: 1, max: 60 })), { maxLength: 30 }), (raw) => {
+        const ivs = raw.map(([s, len]) => ({ start: s, end: s + len }));
+        const lanes = packLanes(ivs);
+        for (let i = 0; i < ivs.length; i++)
+          for (let j = i + 1; j < ivs.length; j++)
+            if (lanes[i] === lanes[j]) expect(ivs[i]!.end <= ivs[j]!.start || ivs[j]!.end <= ivs[i]!.start).toBe(true);
+        // The deepest overlap, found by checking every frame: no packing can use fewer lanes.
+        let deepest = 0;
+        for (let f = 0; f <= 260; f++) deepest = Math.max(deepest, ivs.filter((iv) => iv.start <= f && f < iv.end).length);
+        expect(ivs.length ? Math.max(...lanes) + 1 : 0).toBe(deepest);
+      }),
+      { numRuns: 300 },
+    );
   });
 });

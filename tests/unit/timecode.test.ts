@@ -3,7 +3,7 @@ import fc from "fast-check";
 // Reference implementation, used only here (devDependency).
 // @ts-expect-error untyped package
 import Timecode from "smpte-timecode";
-import { formatTimecode, framesToSeconds, msToFrames, parseTimecode, rateOf, type Rate } from "@/lib/timecode";
+import { formatTimecode, framesToSeconds, msToFrames, parseTimecode, rateOf, rulerTicks, type Rate } from "@/lib/timecode";
 import { FRAME_RATE_IDS, FRAME_RATES, type FrameRateId } from "@/lib/frame-rate";
 
 const DF30 = rateOf("29.97", true);
@@ -124,5 +124,23 @@ describe("properties (fast-check)", () => {
     // 10 h × 3600 s × 30000/1001 = 1078921.08 real frames; drop-frame labels read 10:00:00;00 at 1078920.
     expect(msToFrames(10 * 3600 * 1000, DF30)).toBe(1078921);
     expect(formatTimecode(1078920, DF30)).toBe("10:00:00;00");
+  });
+});
+
+describe("ruler ticks", () => {
+  it("read whole labels at drop-frame, on the minute's first existing label", () => {
+    const df = rateOf("29.97", true);
+    // 2 min 10 s of 29.97 DF; ticks every 15 s.
+    const ticks = rulerTicks(3900, df);
+    expect(ticks.map((t) => t.label)).toEqual(["00:00", "00:15", "00:30", "00:45", "01:00", "01:15", "01:30", "01:45", "02:00"]);
+    // 00:01:00;02 is frame 1800 (SMPTE ST 12-1 worked example; 00:01:00;00 does not exist).
+    expect(ticks.find((t) => t.label === "01:00")!.frame).toBe(1800);
+    // Cross-check every tick with the smpte-timecode reference package: the frame's label starts with the tick's text.
+    for (const t of ticks) expect(new Timecode(t.frame, 29.97, true).toString().slice(3, 8)).toBe(t.label);
+  });
+
+  it("at 25 fps sit on exact seconds", () => {
+    const r = rateOf("25");
+    expect(rulerTicks(25 * 60, r).map((t) => t.frame)).toEqual([0, 125, 250, 375, 500, 625, 750, 875, 1000, 1125, 1250, 1375, 1500]);
   });
 });

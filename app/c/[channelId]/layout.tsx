@@ -12,7 +12,7 @@ export default async function ChannelLayout({ children, params }: { children: Re
   return (
     <>
       <AppHeader channelId={access.channelId} channels={channels} userName={access.user.name} roles={access.roles} mailbox={env().DEV_MAILBOX} />
-      <div className="mx-auto max-w-[1600px] px-4 py-4">{children}</div>
+      <main className="mx-auto max-w-[1600px] px-4 py-4">{children}</main>
     </>
   );
 }

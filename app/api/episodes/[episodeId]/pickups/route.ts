@@ -26,6 +26,7 @@ export const POST = route<P>(async (req, params) => {
   }
   const rate = rateOf(episode.frameRate, episode.dropFrame);
   const description = input.description || `Pickup: B-roll to cover ${formatTimecode(gap.startFrame, rate)}–${formatTimecode(gap.endFrame, rate)}`;
-  const { shot, gapId } = await createPickup({ episodeId: episode.id, gap, description, kind: input.kind });
-  return json({ shot: toShotDto(shot), gapId }, 201);
+  const made = await createPickup({ episodeId: episode.id, gap, description, kind: input.kind });
+  if (made.duplicate) throw new AppError("conflict:gap.pickup", `This gap already has a pickup shot on the shot list: “${made.duplicate.description}”. Capture it, or place B-roll over the gap.`);
+  return json({ shot: toShotDto(made.shot!), gapId: made.gapId }, 201);
 });

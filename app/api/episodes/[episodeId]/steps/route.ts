@@ -3,6 +3,7 @@ import { loadEpisode } from "@/lib/server/loaders";
 import { stepCreateSchema } from "@/lib/schemas/build";
 import { createStep, listStepsByEpisode } from "@/db/queries/build";
 import { listToolsByChannel } from "@/db/queries/tools";
+import { listMembersByChannel } from "@/db/queries/channels";
 import { checkLinks, planView } from "@/lib/server/plan";
 import { AppError } from "@/lib/server/errors";
 import { recordAudit } from "@/db/queries/audit";
@@ -13,8 +14,8 @@ type P = { episodeId: string };
 export const GET = route<P>(async (req, params) => {
   const user = await sessionUser(req);
   const { episode } = await loadEpisode(user.id, params.episodeId);
-  const [steps, shelf] = await Promise.all([listStepsByEpisode({ episodeId: episode.id }), listToolsByChannel({ channelId: episode.channelId })]);
-  return json(await planView(steps, shelf));
+  const [steps, shelf, members] = await Promise.all([listStepsByEpisode({ episodeId: episode.id }), listToolsByChannel({ channelId: episode.channelId }), listMembersByChannel({ channelId: episode.channelId })]);
+  return json(await planView(steps, shelf, members.length));
 });
 
 export const POST = route<P>(async (req, params) => {

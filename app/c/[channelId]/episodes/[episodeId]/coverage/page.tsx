@@ -9,5 +9,5 @@ export default async function CoveragePage({ params }: { params: Promise<{ chann
   const { channelId, episodeId } = await params;
   const { access, episode } = await episodePage(channelId, episodeId, `/c/${channelId}/episodes/${episodeId}/coverage`);
   const clips = (await listClipsByEpisode({ episodeId: episode.id })).filter((c) => c.state === "stored");
-  return <CoverageView episodeId={episode.id} canManage={can(access.roles, "coverage.manage")} canShots={can(access.roles, "shots.edit")} clips={clips.map((c) => ({ id: c.id, name: c.originalName, durationMs: c.durationMs }))} />;
+  return <CoverageView episodeId={episode.id} base={`/c/${access.channelId}/episodes/${episode.id}`} canManage={can(access.roles, "coverage.manage")} canShots={can(access.roles, "shots.edit")} clips={clips.map((c) => ({ id: c.id, name: c.originalName, durationMs: c.durationMs }))} />;
 }

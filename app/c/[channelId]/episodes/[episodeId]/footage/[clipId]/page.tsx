@@ -29,7 +29,7 @@ export default async function ClipPage({ params }: { params: Promise<{ channelId
       <h2 className="text-lg font-bold">{clip.originalName}</h2>
       <p className="num text-xs text-walnut-700">
         {formatBytes(clip.sizeBytes)} · {clip.contentType} · {clip.width && clip.height ? `${clip.width}×${clip.height}` : "size unknown"} · {clip.frameRate ? `${clip.frameRate} fps` : "rate unknown"} · {clip.durationMs != null ? `${(clip.durationMs / 1000).toFixed(2)} s` : "length unknown"}
-        {clip.startTimecode ? ` · starts ${clip.startTimecode}` : ""} · {clip.checksum ?? "no checksum"}
+        {clip.startTimecode ? ` · starts ${clip.startTimecode}` : ""}
       </p>
       {clip.state === "stored" ? (
         <ClipPlayer clipId={clip.id} url={await presignGet(clip.storageKey, 5 * 60)} rate={rate} startTimecode={clip.startTimecode} initialIn={clip.inFrame} initialOut={clip.outFrame} canEdit={can(access.roles, "footage.manage")} />
