@@ -291,7 +291,7 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
             }}
           />
         ) : (
-          <p className="whitespace-pre-wrap rounded-plank border border-timber-200 bg-white px-2 py-1.5 text-[15px] leading-relaxed" aria-label={`Segment ${index + 1} text`} data-testid="segment-text">
+          <p className="whitespace-pre-wrap border-l-2 border-timber-300 py-0.5 pl-3 text-[15px] leading-relaxed" aria-label={`Segment ${index + 1} text`} data-testid="segment-text">
             {text || <span className="text-walnut-600">(no words yet)</span>}
           </p>
         )}
