@@ -11,6 +11,9 @@ export const metadata: Metadata = {
   description: "Plan, film and publish workshop builds as episodes.",
 };
 
+// Every page renders per request: the CSP nonce is new each time, and Next puts it on its scripts.
+export const dynamic = "force-dynamic";
+
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (
     <html lang="en">

@@ -44,6 +44,8 @@ export const users = pgTable(
     passwordHash: text("password_hash").notNull(),
     /** Presenter's reading rate for script timing (words per minute). */
     readingRateWpm: integer("reading_rate_wpm").notNull().default(150),
+    /** Bumped on a password change or "sign out everywhere": sessions signed with an older value end. */
+    sessionVersion: integer("session_version").notNull().default(0),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("users_email_key").on(t.email), check("users_email_lower", sql`${t.email} = lower(${t.email})`)],
@@ -549,10 +551,37 @@ export const mailMessages = pgTable(
     subject: text("subject").notNull().default(""),
     textBody: text("text_body").notNull().default(""),
     htmlBody: text("html_body"),
+    /** Set by the app's own headers when it sends: which channel's action sent it, what kind, about which record. */
+    channelId: uuid("channel_id"),
+    kind: text("kind"),
+    refId: uuid("ref_id"),
     receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("mail_messages_received_idx").on(t.receivedAt)],
+  (t) => [index("mail_messages_received_idx").on(t.receivedAt), index("mail_messages_channel_idx").on(t.channelId, t.kind)],
 );
+
+/**
+ * Storage keys the server issued for a direct upload, with what they are for.
+ * A key a client sends back (a tool photo, a failure photo) must match one of
+ * these exactly, for the same channel and purpose.
+ */
+export const pendingUploads = pgTable(
+  "pending_uploads",
+  {
+    key: text("key").primaryKey(),
+    channelId: uuid("channel_id")
+      .notNull()
+      .references(() => channels.id, { onDelete: "cascade" }),
+    purpose: text("purpose").$type<"tool_photo" | "failure_photo">().notNull(),
+    contentType: text("content_type").notNull(),
+    sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    usedAt: timestamp("used_at", { withTimezone: true }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("pending_uploads_channel_idx").on(t.channelId, t.purpose)],
+);
+export type PendingUpload = typeof pendingUploads.$inferSelect;
 
 export const auditEntries = pgTable(
   "audit_entries",

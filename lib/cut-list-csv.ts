@@ -36,6 +36,14 @@ function size(v: number, unit: "in" | "mm"): string {
   return String(Number(v.toFixed(4)));
 }
 
+/**
+ * Export options for every CSV Jigboard writes. A cell starting with =, +, -,
+ * @, tab or CR would run as a formula in a spreadsheet (OWASP "CSV
+ * Injection"); papaparse's escapeFormulae puts a ' before it. Import keeps
+ * whatever text the file holds.
+ */
+export const CSV_EXPORT_OPTIONS = { escapeFormulae: true } as const;
+
 export function toCsv(rows: CsvRow[]): string {
   return Papa.unparse({
     fields: [...CSV_COLUMNS],
@@ -55,7 +63,7 @@ export function toCsv(rows: CsvRow[]): string {
       r.stepTitle ?? "",
       r.supplierNote,
     ]),
-  });
+  }, CSV_EXPORT_OPTIONS);
 }
 
 export interface CsvRecord {

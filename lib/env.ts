@@ -32,6 +32,8 @@ const envSchema = z.object({
   UPLOAD_PART_BYTES: z.coerce.number().int().min(5 * 1024 * 1024).default(16 * 1024 * 1024),
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().min(1).default(5),
   SIGN_IN_WINDOW_SECONDS: z.coerce.number().int().min(10).default(900),
+  /** Only behind a proxy that sets X-Forwarded-For: then the rightmost entry is the client. Otherwise the socket address counts. */
+  TRUST_PROXY: bool.default(false),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -8,6 +8,7 @@ import path from "node:path";
 // @ts-expect-error untyped package
 import S3rver from "s3rver";
 import { multipartExtension } from "./local-s3-multipart";
+import { presignedSignatureCheck } from "./local-s3-presigned";
 
 const CORS = `<CORSConfiguration>
   <CORSRule>
@@ -28,7 +29,7 @@ export interface LocalS3 {
   stop(): Promise<void>;
 }
 
-export async function startLocalS3(opts: { directory: string; port: number; bucket: string }): Promise<LocalS3> {
+export async function startLocalS3(opts: { directory: string; port: number; bucket: string; region?: string }): Promise<LocalS3> {
   fs.mkdirSync(opts.directory, { recursive: true });
   const server = new S3rver({
     address: "127.0.0.1",
@@ -39,6 +40,8 @@ export async function startLocalS3(opts: { directory: string; port: number; buck
   });
   // Answer the multipart calls s3rver lacks before its own router sees them.
   (server as { middleware: unknown[] }).middleware.unshift(multipartExtension(path.resolve(opts.directory)));
+  // Check presigned signatures as a real store does, before anything else.
+  (server as { middleware: unknown[] }).middleware.unshift(presignedSignatureCheck({ accessKeyId: "S3RVER", secretAccessKey: "S3RVER", region: opts.region ?? "us-east-1" }));
   await server.run();
   return {
     endpoint: `http://127.0.0.1:${opts.port}`,

@@ -100,6 +100,8 @@ async function main() {
       JIGBOARD_TEST_URL: `http://127.0.0.1:${appPort}`,
       NEXT_TELEMETRY_DISABLED: "1",
       SIGN_IN_MAX_FAILURES: "5",
+      // The tests act as the proxy in front of the app: X-Forwarded-For names the client.
+      TRUST_PROXY: "true",
       // Small parts so the browser tests see several parts on a small file.
       UPLOAD_PART_BYTES: String(5 * 1024 * 1024),
     };
@@ -111,7 +113,7 @@ async function main() {
         const b = spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env: { ...env, NODE_ENV: "production" } });
         if (b.status !== 0) throw new Error("next build failed");
       }
-      app = spawn(process.execPath, [nextBin, "start", "-H", "127.0.0.1", "-p", String(appPort)], {
+      app = spawn(process.execPath, [path.join(root, "lib", "server", "serve.mjs"), "127.0.0.1", String(appPort)], {
         env: { ...env, NODE_ENV: "production" },
         stdio: ["ignore", fs.openSync(path.join(artifacts, "app.log"), "w"), fs.openSync(path.join(artifacts, "app.err.log"), "w")],
         detached: true,

@@ -14,14 +14,14 @@ export async function recordSignInAttempt({ keys, succeeded }: { keys: string[];
  */
 export async function countRecentFailures({ key, windowSeconds }: { key: string; windowSeconds: number }) {
   const rows = await db().execute(sql`
-    select count(*)::int as failures, min(attempted_at) as oldest
+    select count(*)::int as failures, min(attempted_at) as oldest, max(attempted_at) as newest
     from sign_in_attempts
     where key = ${key}
       and not succeeded
       and attempted_at > now() - make_interval(secs => ${windowSeconds})
       and attempted_at > coalesce((select max(attempted_at) from sign_in_attempts where key = ${key} and succeeded), '-infinity')`);
-  const r = rows.rows[0] as { failures: number; oldest: string | Date | null };
-  return { failures: r.failures, oldest: r.oldest ? new Date(r.oldest) : null };
+  const r = rows.rows[0] as { failures: number; oldest: string | Date | null; newest: string | Date | null };
+  return { failures: r.failures, oldest: r.oldest ? new Date(r.oldest) : null, newest: r.newest ? new Date(r.newest) : null };
 }
 
 export async function createInvitation(v: { channelId: string; email: string; roles: Role[]; tokenHash: string; invitedBy: string; expiresAt: Date }) {
@@ -90,6 +90,14 @@ export async function acceptInvitation({ tokenHash, name, passwordHash }: { toke
   });
 }
 
+/** Ends every session of the account: tokens carry the version they were signed with. */
+export async function bumpSessionVersion({ userId }: { userId: string }) {
+  await db()
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
+}
+
 export async function createPasswordReset(v: { userId: string; tokenHash: string; expiresAt: Date }) {
   await db().insert(passwordResets).values(v);
 }
@@ -103,7 +111,12 @@ export async function consumePasswordReset({ tokenHash, passwordHash }: { tokenH
       .where(and(eq(passwordResets.tokenHash, tokenHash), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, new Date())))
       .returning();
     if (!row) return null;
-    await tx.update(users).set({ passwordHash }).where(eq(users.id, row.userId));
+    // Every other outstanding link for the account dies with this one, and every session signed before now ends.
+    await tx.update(passwordResets).set({ usedAt: new Date() }).where(and(eq(passwordResets.userId, row.userId), isNull(passwordResets.usedAt)));
+    await tx
+      .update(users)
+      .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(eq(users.id, row.userId));
     return row.userId;
   });
 }

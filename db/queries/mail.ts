@@ -4,19 +4,18 @@ import { db } from "../client";
 import type { MailMessage } from "../schema";
 
 /**
- * The dev mailbox of one channel: only messages sent to its members or to
- * addresses it invited, so one channel's owner never reads another's links.
+ * The dev mailbox of one channel: only mail this channel's own actions sent,
+ * which today is its invitations while they are still pending (not accepted,
+ * revoked or expired). Password resets and other channels' mail never show,
+ * whoever they were sent to.
  */
 export async function listMailMessagesForChannel({ channelId, limit = 100 }: { channelId: string; limit?: number }): Promise<MailMessage[]> {
   const r = await db().execute(sql`
-    select m.id, m.from_address, m.to_addresses, m.subject, m.text_body, m.html_body, m.received_at
+    select m.id, m.from_address, m.to_addresses, m.subject, m.text_body, m.html_body, m.channel_id, m.kind, m.ref_id, m.received_at
     from mail_messages m
-    where m.to_addresses && (
-      select coalesce(array_agg(email), '{}') from (
-        select u.email from memberships ms join users u on u.id = ms.user_id where ms.channel_id = ${channelId}
-        union select i.email from invitations i where i.channel_id = ${channelId}
-      ) addresses
-    )
+    join invitations i on i.id = m.ref_id and i.channel_id = ${channelId}
+    where m.channel_id = ${channelId} and m.kind = 'invitation'
+      and i.accepted_at is null and i.revoked_at is null and i.expires_at > now()
     order by m.received_at desc
     limit ${limit}`);
   return (r.rows as Record<string, unknown>[]).map((row) => ({
@@ -26,6 +25,9 @@ export async function listMailMessagesForChannel({ channelId, limit = 100 }: { c
     subject: row.subject as string,
     textBody: row.text_body as string,
     htmlBody: (row.html_body as string | null) ?? null,
+    channelId: (row.channel_id as string | null) ?? null,
+    kind: (row.kind as string | null) ?? null,
+    refId: (row.ref_id as string | null) ?? null,
     receivedAt: new Date(row.received_at as string),
   }));
 }

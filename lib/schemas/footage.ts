@@ -81,13 +81,18 @@ export const shotBulkSchema = z
   .strict()
   .meta({ id: "ShotBulkStatus" });
 
-/** A file name is kept only as a label: no folders, no control characters. */
+/**
+ * A file name is kept only as a label: no folders, no control characters, and
+ * no bidirectional controls (U+061C, U+200E/F, U+202A-E, U+2066-9), which can
+ * make "clip_gpj.mp4" read as something else.
+ */
 export const fileNameSchema = z
   .string()
   .trim()
   .min(1, "the file needs a name")
   .max(255, "file names can be at most 255 characters")
-  .refine((n) => !/[\\/]/.test(n) && !/[\u0000-\u001f\u007f]/.test(n) && n !== "." && n !== "..", "file names cannot contain folders (/ or \\) or control characters");
+  .refine((n) => !/[\\/]/.test(n) && !/[\u0000-\u001f\u007f]/.test(n) && n !== "." && n !== "..", "file names cannot contain folders (/ or \\) or control characters")
+  .refine((n) => !/[\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/.test(n), "file names cannot contain right-to-left or other direction controls");
 
 export function uploadCreateSchema(maxBytes: number) {
   return z

@@ -6,6 +6,7 @@ import { env } from "../env";
 import { signInSchema } from "../schemas/account";
 import { getUserByEmail } from "../../db/queries/users";
 import { clientAddress, recordSignIn, signInKeys } from "./rate-limit";
+import { safeCallbackPath } from "../safe-redirect";
 
 // Compared against when the e-mail is unknown, so timing does not reveal which accounts exist.
 const DUMMY_HASH = "$2b$10$ZQI5kAzYXXBOnH/TZkbJTOKXHQ58DY.9hJEcqZHMoaq/kRLgnVHjq";
@@ -28,14 +29,27 @@ export function authOptions(): NextAuthOptions {
           const ok = await bcrypt.compare(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);
           await recordSignIn(keys, Boolean(user && ok));
           if (!user || !ok) return null;
-          return { id: user.id, email: user.email, name: user.name };
+          return { id: user.id, email: user.email, name: user.name, sv: user.sessionVersion };
         },
       }),
     ],
     callbacks: {
       async jwt({ token, user }) {
-        if (user) token.sub = user.id;
+        if (user) {
+          token.sub = user.id;
+          token.sv = (user as { sv?: number }).sv ?? 0;
+        }
         return token;
+      },
+      // Only same-site paths, whatever next-auth is handed; never a throw on an odd value.
+      async redirect({ url, baseUrl }) {
+        try {
+          const u = new URL(url, baseUrl);
+          if (u.origin !== new URL(baseUrl).origin) return baseUrl;
+          return `${baseUrl}${safeCallbackPath(`${u.pathname}${u.search}`)}`;
+        } catch {
+          return baseUrl;
+        }
       },
       async session({ session, token }) {
         if (session.user && token.sub) (session.user as { id?: string }).id = token.sub;

@@ -67,6 +67,11 @@ export function toResponse(e: unknown): Response {
   if (e instanceof AppError) {
     return Response.json(errorBody(e), { status: e.status, headers: e.headers });
   }
+  // PostgreSQL refused a character the input carried (a NUL that slipped past parsing): the input's fault, not ours.
+  const pgCode = (e as { code?: unknown } | null)?.code ?? (e as { cause?: { code?: unknown } } | null)?.cause?.code;
+  if (pgCode === "22P05" || pgCode === "22021") {
+    return Response.json({ error: { code: "validation:text", message: "The text contains a character that cannot be stored (such as NUL). Remove it and try again." } }, { status: 400 });
+  }
   // Database and other unexpected errors are logged, never returned.
   console.error("[api] unexpected error", e);
   return Response.json({ error: { code: "internal", message: "Something went wrong on our side. Try again." } }, { status: 500 });

@@ -30,14 +30,22 @@ export async function startLocalSmtp(opts: { port: number; databaseUrl: string }
         .then(async (mail) => {
           const to = addresses(mail.to);
           const envelopeTo = session.envelope.rcptTo.map((r) => r.address);
+          const uuidHeader = (name: string) => {
+            const v = mail.headers.get(name);
+            return typeof v === "string" && /^[0-9a-f-]{36}$/i.test(v.trim()) ? v.trim() : null;
+          };
+          const kind = mail.headers.get("x-jigboard-kind");
           await pool.query(
-            "insert into mail_messages (from_address, to_addresses, subject, text_body, html_body) values ($1, $2, $3, $4, $5)",
+            "insert into mail_messages (from_address, to_addresses, subject, text_body, html_body, channel_id, kind, ref_id) values ($1, $2, $3, $4, $5, $6, $7, $8)",
             [
               addresses(mail.from)[0] ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : ""),
               to.length ? to : envelopeTo,
               mail.subject ?? "",
               mail.text ?? "",
               typeof mail.html === "string" ? mail.html : null,
+              uuidHeader("x-jigboard-channel"),
+              typeof kind === "string" ? kind.trim().slice(0, 40) : null,
+              uuidHeader("x-jigboard-ref"),
             ],
           );
           callback();

@@ -14,8 +14,19 @@ function transport(): Transporter {
   return g.__jigboardMail;
 }
 
-export async function sendMail(msg: { to: string; subject: string; text: string }): Promise<void> {
-  await transport().sendMail({ from: env().MAIL_FROM, ...msg });
+/** What sent a message: the local mail fake files it by these, so a channel's dev mailbox shows only its own mail. */
+export interface MailTag {
+  kind: "invitation" | "password_reset";
+  channelId?: string;
+  refId?: string;
+}
+
+export async function sendMail(msg: { to: string; subject: string; text: string; tag: MailTag }): Promise<void> {
+  const { tag, ...rest } = msg;
+  const headers: Record<string, string> = { "X-Jigboard-Kind": tag.kind };
+  if (tag.channelId) headers["X-Jigboard-Channel"] = tag.channelId;
+  if (tag.refId) headers["X-Jigboard-Ref"] = tag.refId;
+  await transport().sendMail({ from: env().MAIL_FROM, ...rest, headers });
 }
 
 export function appUrl(path: string): string {

@@ -17,8 +17,8 @@ function parseCookies(header: string | null): Map<string, string> {
   return map;
 }
 
-/** Reads next-auth's JWT session cookie (chunked or not) from a Cookie header. */
-export async function userIdFromCookieHeader(header: string | null): Promise<string | null> {
+/** Reads next-auth's JWT session cookie (chunked or not) from a Cookie header: the user and the session version it was signed with. */
+export async function sessionFromCookieHeader(header: string | null): Promise<{ sub: string; sv: number } | null> {
   const cookies = parseCookies(header);
   for (const name of COOKIE_NAMES) {
     let token = cookies.get(name);
@@ -30,7 +30,7 @@ export async function userIdFromCookieHeader(header: string | null): Promise<str
     if (!token) continue;
     try {
       const payload = await decode({ token, secret: env().NEXTAUTH_SECRET });
-      if (payload?.sub) return payload.sub;
+      if (payload?.sub) return { sub: payload.sub, sv: typeof payload.sv === "number" ? payload.sv : 0 };
     } catch {
       return null;
     }
@@ -45,11 +45,13 @@ export interface SessionUser {
 }
 
 /** The signed-in user, re-read from the database so a removed account is out at once. */
+
 export async function requireUser(cookieHeader: string | null): Promise<SessionUser> {
-  const id = await userIdFromCookieHeader(cookieHeader);
-  if (!id) throw new AppError("unauthenticated", "Sign in to continue.");
-  const user = await getUserById({ id });
-  if (!user) throw new AppError("unauthenticated", "Your session has ended. Sign in again.");
+  const session = await sessionFromCookieHeader(cookieHeader);
+  if (!session) throw new AppError("unauthenticated", "Sign in to continue.");
+  const user = await getUserById({ id: session.sub });
+  // A password change or "sign out everywhere" bumps the version: older sessions end here, on their next request.
+  if (!user || user.sessionVersion !== session.sv) throw new AppError("unauthenticated", "Your session has ended. Sign in again.");
   return { id: user.id, email: user.email, name: user.name };
 }
 

@@ -1,6 +1,6 @@
 /**
  * `npm start`: local services → migrations → demo seed (once) → build if
- * needed → `next start` on 127.0.0.1. Ctrl-C or SIGTERM stops everything
+ * needed → the app (lib/server/serve.mjs) on 127.0.0.1. Ctrl-C or SIGTERM stops everything
  * this process started; a second start reuses the data in .data/.
  */
 import { spawn, spawnSync } from "node:child_process";
@@ -75,7 +75,7 @@ async function main() {
     if (b.status !== 0) return shutdown(b.status ?? 1);
   }
 
-  const child = spawn(process.execPath, [nextBin, dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(port)], {
+  const child = spawn(process.execPath, [path.join(root, "lib", "server", "serve.mjs"), "127.0.0.1", String(port), ...(dev ? ["--dev"] : [])], {
     stdio: "inherit",
     env: childEnv,
     detached: true,

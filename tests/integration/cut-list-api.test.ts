@@ -10,7 +10,7 @@ let w: World;
 let episodeId: string;
 
 async function csvCall(ep: string, text: string, user: { id: string }) {
-  return call(csvRoute.POST as never, { method: "POST", params: { episodeId: ep }, rawBody: text, user });
+  return call(csvRoute.POST as never, { method: "POST", params: { episodeId: ep }, rawBody: text, user, headers: { "content-type": "text/csv" } });
 }
 
 beforeAll(async () => {

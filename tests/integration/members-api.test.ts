@@ -145,6 +145,10 @@ describe("password reset", () => {
 
 describe("dev mailbox", () => {
   it("owner reads it; other roles 403; outsiders 404", async () => {
+    // A pending invitation of this channel, so there is mail to show.
+    const pending = `pending-${Date.now()}@test.example`;
+    await call(invitesRoute.POST as never, { method: "POST", params: { channelId: w.channel.id }, body: { email: pending, roles: ["editor"] }, user: w.members.owner });
+    await waitForMail(pending, "invited you");
     const ok = await call(mailboxRoute.GET as never, { path: `/x?channelId=${w.channel.id}`, user: w.members.owner });
     expect(ok.status).toBe(200);
     expect(ok.json.messages.length).toBeGreaterThan(0);

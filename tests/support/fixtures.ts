@@ -49,9 +49,9 @@ type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) 
 /** Calls a route handler in-process with a real Request, as Next would. */
 export async function call(
   handler: Handler,
-  opts: { method?: string; path?: string; params?: Record<string, string>; body?: unknown; rawBody?: string; user?: { id: string } | null },
+  opts: { method?: string; path?: string; params?: Record<string, string>; body?: unknown; rawBody?: string; user?: { id: string } | null; headers?: Record<string, string> },
 ) {
-  const headers: Record<string, string> = { "content-type": "application/json" };
+  const headers: Record<string, string> = { "content-type": "application/json", ...opts.headers };
   if (opts.user) headers.cookie = await cookieFor(opts.user.id);
   const req = new Request(`http://127.0.0.1${opts.path ?? "/"}`, {
     method: opts.method ?? "GET",

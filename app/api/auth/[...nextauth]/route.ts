@@ -2,14 +2,30 @@ import NextAuth from "next-auth";
 import { authOptions } from "@/lib/server/auth";
 import { assertSignInAllowed, clientAddress, signInKeys } from "@/lib/server/rate-limit";
 import { toResponse } from "@/lib/server/errors";
+import { env } from "@/lib/env";
 
 type Ctx = { params: Promise<{ nextauth: string[] }> };
 
+/** Back to the sign-in page, for requests next-auth cannot make sense of. */
+function toSignIn(error: string) {
+  return Response.redirect(new URL(`/sign-in?error=${encodeURIComponent(error)}`, env().NEXTAUTH_URL), 303);
+}
+
+/** next-auth throws on some odd input (a callback URL it cannot parse); that is the caller's mistake, never a 500. */
 async function handler(req: Request, ctx: Ctx) {
-  return NextAuth(authOptions())(req, ctx);
+  try {
+    const res = await NextAuth(authOptions())(req, ctx);
+    return res.status >= 500 ? toSignIn("Configuration") : res;
+  } catch (e) {
+    console.error("[auth] refused a request next-auth could not handle:", (e as Error).message);
+    return toSignIn("Callback");
+  }
 }
 
 export async function GET(req: Request, ctx: Ctx) {
+  const { nextauth } = await ctx.params;
+  // Credentials are only ever posted; a GET here is a stray link.
+  if (nextauth.join("/") === "callback/credentials") return toSignIn("CredentialsSignin");
   return handler(req, ctx);
 }
 
@@ -17,9 +33,13 @@ export async function GET(req: Request, ctx: Ctx) {
 export async function POST(req: Request, ctx: Ctx) {
   const { nextauth } = await ctx.params;
   if (nextauth.join("/") === "callback/credentials") {
+    let email = "";
     try {
-      const form = await req.clone().formData();
-      const email = String(form.get("email") ?? "");
+      email = String((await req.clone().formData()).get("email") ?? "");
+    } catch {
+      return toSignIn("CredentialsSignin"); // not a form post: nothing to sign in with
+    }
+    try {
       await assertSignInAllowed(signInKeys(email, clientAddress(req.headers)));
     } catch (e) {
       return toResponse(e);

@@ -5,6 +5,7 @@ import { toolUpdateSchema } from "@/lib/schemas/build";
 import { archiveTool, sponsorBelongsToChannel, updateTool } from "@/db/queries/tools";
 import { toolDto } from "@/lib/server/plan";
 import { AppError } from "@/lib/server/errors";
+import { claimUpload } from "@/lib/server/uploads";
 
 type P = { toolId: string };
 
@@ -16,6 +17,7 @@ export const PATCH = route<P>(async (req, params) => {
   if (patch.sponsorId && !(await sponsorBelongsToChannel({ sponsorId: patch.sponsorId, channelId: tool.channelId }))) {
     throw new AppError("unprocessable:tool.sponsor", "That sponsor is not one of this channel's.", { fields: { sponsorId: ["not a sponsor of this channel"] } });
   }
+  if (patch.photoKey && patch.photoKey !== tool.photoKey) await claimUpload({ key: patch.photoKey, channelId: tool.channelId, purpose: "tool_photo", field: "photoKey" });
   const row = await updateTool({ id: tool.id, channelId: tool.channelId, patch });
   if (!row) throw new AppError("not_found:tool", "No such tool.");
   return json({ tool: toolDto(row) });

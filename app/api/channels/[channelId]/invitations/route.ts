@@ -38,6 +38,7 @@ export const POST = route<P>(async (req, params) => {
       "",
       "The link works once and expires in 7 days.",
     ].join("\n"),
+    tag: { kind: "invitation", channelId, refId: inv.id },
   });
   await recordAudit({ channelId, userId: user.id, action: "invite", entity: "invitation", entityId: inv.id, after: { email: input.email, roles: input.roles } });
   return json({ invitation: { id: inv.id, email: inv.email, roles: inv.roles, expiresAt: inv.expiresAt.toISOString() } }, 201);

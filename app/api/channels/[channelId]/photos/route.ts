@@ -1,8 +1,7 @@
 import { json, parseBody, parseId, route, sessionUser } from "@/lib/server/api";
 import { requireChannel } from "@/lib/server/access";
 import { photoUploadSchema } from "@/lib/schemas/build";
-import { newObjectKey } from "@/storage/keys";
-import { presignPut } from "@/storage/presign";
+import { issuePhotoUpload } from "@/lib/server/uploads";
 
 type P = { channelId: string };
 
@@ -12,6 +11,5 @@ export const POST = route<P>(async (req, params) => {
   const user = await sessionUser(req);
   const channelId = parseId(params.channelId, "channel");
   await requireChannel(user.id, channelId, "tools.edit");
-  const key = newObjectKey(channelId, "photo", input.contentType.split("/")[1]!.replace("jpeg", "jpg"));
-  return json({ key, uploadUrl: await presignPut(key, input.contentType, input.size), headers: { "content-type": input.contentType } }, 201);
+  return json(await issuePhotoUpload({ channelId, userId: user.id, purpose: "tool_photo", contentType: input.contentType, size: input.size }), 201);
 });

@@ -4,6 +4,7 @@ import { toolCreateSchema } from "@/lib/schemas/build";
 import { createTool, listToolsByChannel, sponsorBelongsToChannel } from "@/db/queries/tools";
 import { toolDto } from "@/lib/server/plan";
 import { AppError } from "@/lib/server/errors";
+import { claimUpload } from "@/lib/server/uploads";
 
 type P = { channelId: string };
 
@@ -22,8 +23,6 @@ export const POST = route<P>(async (req, params) => {
   if (input.sponsorId && !(await sponsorBelongsToChannel({ sponsorId: input.sponsorId, channelId }))) {
     throw new AppError("unprocessable:tool.sponsor", "That sponsor is not one of this channel's.", { fields: { sponsorId: ["not a sponsor of this channel"] } });
   }
-  if (input.photoKey && !input.photoKey.startsWith(`channel/${channelId}/photo/`)) {
-    throw new AppError("unprocessable:tool.photo", "That photo was not uploaded for this channel.", { fields: { photoKey: ["upload the photo first"] } });
-  }
+  if (input.photoKey) await claimUpload({ key: input.photoKey, channelId, purpose: "tool_photo", field: "photoKey" });
   return json({ tool: toolDto(await createTool({ channelId, input })) }, 201);
 });

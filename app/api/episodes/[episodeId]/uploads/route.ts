@@ -21,8 +21,7 @@ export const POST = route<P>(async (req, params) => {
   if (input.shotId && !(await shotInEpisode({ shotId: input.shotId, episodeId: episode.id }))) {
     throw new AppError("unprocessable:upload.shot", "That shot is not on this episode's shot list.", { fields: { shotId: ["not a shot of this episode"] } });
   }
-  const ext = input.fileName.includes(".") ? input.fileName.split(".").pop()! : input.contentType.split("/")[1]!;
-  const key = newObjectKey(episode.channelId, "footage", ext);
+  const key = newObjectKey(episode.channelId, "footage", input.contentType);
   const { partSize, partCount } = planParts(input.size, env().UPLOAD_PART_BYTES);
   const uploadId = await createUpload(key, input.contentType);
   const clip = await createClip({

@@ -1,4 +1,3 @@
-import { HeadObjectCommand } from "@aws-sdk/client-s3";
 import { json, parseBody, route, sessionUser } from "@/lib/server/api";
 import { loadStep } from "@/lib/server/loaders";
 import { assertCan } from "@/lib/server/access";
@@ -6,8 +5,7 @@ import { stepFailureSchema } from "@/lib/schemas/build";
 import { updateStep } from "@/db/queries/build";
 import { AppError } from "@/lib/server/errors";
 import { recordAudit } from "@/db/queries/audit";
-import { keyBelongsToChannel } from "@/storage/keys";
-import { bucket, s3 } from "@/storage/s3";
+import { claimUpload } from "@/lib/server/uploads";
 
 type P = { stepId: string };
 
@@ -17,15 +15,7 @@ export const POST = route<P>(async (req, params) => {
   const user = await sessionUser(req);
   const { step, channelId, access } = await loadStep(user.id, params.stepId);
   assertCan(access, "build.edit");
-  if (input.photoKey) {
-    const bad = () => new AppError("unprocessable:step.photo", "That photo was not uploaded for this channel. Upload it again.", { fields: { photoKey: ["upload the photo first"] } });
-    if (!keyBelongsToChannel(input.photoKey, channelId) || !input.photoKey.includes("/photo/")) throw bad();
-    await s3()
-      .send(new HeadObjectCommand({ Bucket: bucket(), Key: input.photoKey }))
-      .catch(() => {
-        throw bad();
-      });
-  }
+  if (input.photoKey) await claimUpload({ key: input.photoKey, channelId, purpose: "failure_photo", field: "photoKey" });
   const result = await updateStep({
     stepId: step.id,
     episodeId: step.episodeId,

@@ -28,6 +28,8 @@ export const GET = route<P>(async (req, params) => {
 export const POST = route<P>(async (req, params) => {
   const text = await req.text();
   if (text.length > MAX_CSV_BYTES) throw new AppError("validation:csv", "The file is larger than 2 MB; split it.");
+  const nulAt = text.indexOf("\u0000");
+  if (nulAt >= 0) throw new AppError("validation:csv", `Line ${text.slice(0, nulAt).split("\n").length} contains a NUL character, which cannot be stored. Save the file again as plain CSV text.`);
   const parsed = parseCsv(text);
   if (!parsed.ok) throw new AppError("validation:csv", parsed.message);
   if (parsed.records.length === 0) throw new AppError("validation:csv", "The file has a header but no rows.");
@@ -51,7 +53,7 @@ export const POST = route<P>(async (req, params) => {
   }
   const created = await createMaterials({ episodeId: episode.id, rows });
   return json({ imported: created.length }, 201);
-});
+}, { accepts: ["text/csv", "application/csv"] });
 
 function csvName(field: string): string {
   const map: Record<string, string> = { partName: "part", pricingUnit: "pricing_unit", unitPriceMinor: "unit_price", wastePercent: "waste_percent", stepId: "step", supplierNote: "supplier_note" };

@@ -1,4 +1,5 @@
 import Papa from "papaparse";
+import { CSV_EXPORT_OPTIONS } from "@/lib/cut-list-csv";
 import { route, sessionUser } from "@/lib/server/api";
 import { loadEpisode } from "@/lib/server/loaders";
 import { listShotsByEpisode } from "@/db/queries/shots";
@@ -14,6 +15,6 @@ export const GET = route<P>(async (req, params) => {
   const csv = Papa.unparse({
     fields: ["kind", "description", "step", "framing", "camera_notes", "priority", "status"],
     data: shots.map((s) => [s.kind, s.description, s.stepId ? (title.get(s.stepId) ?? "") : "", s.framing, s.cameraNotes, s.priority, s.status]),
-  });
+  }, CSV_EXPORT_OPTIONS);
   return new Response(csv, { headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="shot-list.csv"` } });
 });
