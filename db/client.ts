@@ -17,8 +17,34 @@ export function pool(): pg.Pool {
   return g.__jigboardPool;
 }
 
+const RETRYABLE = new Set(["40001", "40P01"]); // serialization failure, deadlock detected
+
+function pgCode(e: unknown): unknown {
+  return (e as { code?: unknown } | null)?.code ?? (e as { cause?: { code?: unknown } } | null)?.cause?.code;
+}
+
+/**
+ * Transactions that PostgreSQL aborted as a deadlock or a serialization
+ * failure are run again, a few times with jittered backoff. Callbacks only
+ * touch the database, so running one again is safe.
+ */
+function withRetries(base: Db): Db {
+  const original = base.transaction.bind(base);
+  base.transaction = (async (fn: Parameters<Db["transaction"]>[0], config?: Parameters<Db["transaction"]>[1]) => {
+    for (let attempt = 1; ; attempt++) {
+      try {
+        return await original(fn, config);
+      } catch (e) {
+        if (!RETRYABLE.has(pgCode(e) as string) || attempt >= 4) throw e;
+        await new Promise((r) => setTimeout(r, Math.random() * 20 * 2 ** attempt));
+      }
+    }
+  }) as Db["transaction"];
+  return base;
+}
+
 export function db(): Db {
-  if (!g.__jigboardDb) g.__jigboardDb = drizzle(pool(), { schema });
+  if (!g.__jigboardDb) g.__jigboardDb = withRetries(drizzle(pool(), { schema }));
   return g.__jigboardDb;
 }
 

@@ -75,4 +75,41 @@ describe("served app", () => {
     await new Promise((r) => setTimeout(r, 1100));
     expect((await signIn(email, PASSWORD, "198.51.100.77")).session).toBeTruthy();
   });
+
+  it("sends security headers on pages and API answers, with a fresh script nonce that Next puts on its scripts", async () => {
+    for (const path of ["/sign-in", "/api/health", "/api/channels"]) {
+      const r = await fetch(`${BASE}${path}`);
+      expect(r.headers.get("x-frame-options"), path).toBe("DENY");
+      expect(r.headers.get("x-content-type-options")).toBe("nosniff");
+      expect(r.headers.get("referrer-policy")).toBe("same-origin");
+      expect(r.headers.get("permissions-policy")).toContain("camera=()");
+      expect(r.headers.get("cross-origin-opener-policy")).toBe("same-origin");
+      const csp = r.headers.get("content-security-policy") ?? "";
+      expect(csp).toContain("frame-ancestors 'none'");
+      expect(csp).toContain("object-src 'none'");
+      expect(csp).not.toMatch(/script-src[^;]*'unsafe-inline'/);
+    }
+    const page = await fetch(`${BASE}/sign-in`);
+    const nonce = /'nonce-([^']+)'/.exec(page.headers.get("content-security-policy") ?? "")?.[1];
+    expect(nonce).toBeTruthy();
+    const html = await page.text();
+    const scripts = [...html.matchAll(/<script\b[^>]*>/g)].map((m) => m[0]);
+    expect(scripts.length).toBeGreaterThan(0);
+    for (const tag of scripts) expect(tag).toContain(`nonce="${nonce}"`);
+    const again = await fetch(`${BASE}/sign-in`);
+    expect(again.headers.get("content-security-policy")).not.toContain(nonce!);
+  });
+
+  it("answers next-auth's odd inputs with a redirect or a 4xx, never a 500", async () => {
+    for (const cb of ["\\\\evil.example", "%2F%2Fevil.example", "http://127.0.0.1:3917.evil.example/", "javascript:alert(1)", "//evil.example"]) {
+      const r = await fetch(`${BASE}/api/auth/signin?callbackUrl=${encodeURIComponent(cb)}`, { redirect: "manual" });
+      expect(r.status, cb).toBeLessThan(500);
+      const loc = r.headers.get("location") ?? "";
+      expect(loc, cb).not.toMatch(/evil\.example|javascript:/);
+    }
+    const get = await fetch(`${BASE}/api/auth/callback/credentials`, { redirect: "manual" });
+    expect(get.status).toBeLessThan(500);
+    const junk = await fetch(`${BASE}/api/auth/callback/credentials`, { method: "POST", redirect: "manual", headers: { "content-type": "application/json" }, body: "{" });
+    expect(junk.status).toBeLessThan(500);
+  });
 });

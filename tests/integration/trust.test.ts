@@ -22,7 +22,7 @@ import * as materialsRoute from "@/app/api/episodes/[episodeId]/materials/route"
 import * as uploadsRoute from "@/app/api/episodes/[episodeId]/uploads/route";
 import * as channelsRoute from "@/app/api/channels/route";
 import { db } from "@/db/client";
-import { clips, passwordResets } from "@/db/schema";
+import { clips } from "@/db/schema";
 import { call, makeEpisode, makeUser, makeWorld } from "../support/fixtures";
 import { linkToken, waitForMail } from "../support/mail";
 
