@@ -162,3 +162,18 @@ export function rulerTicks(totalFrames: number, rate: Rate, maxTicks = 12): { fr
   }
   return out;
 }
+
+/**
+ * A frame count stored at one rate, expressed at another: the same instant
+ * in time, rounded to the nearest frame (halves away from zero), in exact
+ * integer arithmetic: frames × (num₂/den₂) ÷ (num₁/den₁). Frames stored at a
+ * rate mean that rate, so this runs wherever the rate changes.
+ */
+export function convertFrames(frames: number, from: Pick<Rate, "num" | "den">, to: Pick<Rate, "num" | "den">): number {
+  if (from.num === to.num && from.den === to.den) return frames;
+  const numer = BigInt(frames) * BigInt(to.num) * BigInt(from.den);
+  const denom = BigInt(to.den) * BigInt(from.num);
+  const sign = numer < 0n ? -1n : 1n;
+  const abs = numer * sign;
+  return Number(sign * ((2n * abs + denom) / (2n * denom)));
+}

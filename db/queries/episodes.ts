@@ -1,6 +1,7 @@
 import "server-only";
 import { and, asc, eq, gte, isNotNull, isNull, lt, ne, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
+import { touchEpisode } from "./episode-lock";
 import { channels, episodes, type Episode } from "../schema";
 import type { Stage } from "../../lib/stages";
 import type { EpisodeCreate, EpisodeDto, EpisodeUpdate } from "../../lib/schemas/episode";
@@ -108,12 +109,28 @@ export async function createEpisode({ channelId, userId, input }: { channelId: s
  * episode at `position` in the target stage (clamped) and renumbers both
  * columns densely.
  */
+/**
+ * Frames stored at one rate, re-expressed at another in one statement per
+ * table: the same instants, rounded to the nearest frame (halves up), the
+ * arithmetic of convertFrames in lib/timecode.ts. Ranges keep at least one frame.
+ */
+async function convertStoredFrames(tx: Tx, episodeId: string, from: { num: number; den: number }, to: { num: number; den: number }) {
+  const mul = to.num * from.den;
+  const div = to.den * from.num;
+  const conv = (col: string) => sql.raw(`((2::bigint * ${col} * ${mul} + ${div}) / (2::bigint * ${div}))::int`);
+  await tx.execute(sql`update script_segments set pinned_start_frame = ${conv("pinned_start_frame")}, explicit_duration_frames = ${conv("explicit_duration_frames")} where episode_id = ${episodeId}`);
+  await tx.execute(sql`update coverage_ranges set start_frame = ${conv("start_frame")}, end_frame = greatest(${conv("end_frame")}, ${conv("start_frame")} + 1), clip_in_frame = ${conv("clip_in_frame")} where episode_id = ${episodeId}`);
+  await tx.execute(sql`update gaps set start_frame = ${conv("start_frame")}, end_frame = greatest(${conv("end_frame")}, ${conv("start_frame")} + 1) where episode_id = ${episodeId}`);
+  await tx.execute(sql`update clips set in_frame = ${conv("in_frame")}, out_frame = ${conv("out_frame")} where episode_id = ${episodeId}`);
+}
+
 export async function updateEpisode({
   id,
   channelId,
   userId,
   patch,
   check,
+  rates,
 }: {
   id: string;
   channelId: string;
@@ -121,12 +138,20 @@ export async function updateEpisode({
   patch: EpisodeUpdate;
   /** Called with the locked row before writing; throws to refuse. */
   check?: (current: Episode) => void;
+  /** When the frame rate changes: the old and new rates, so stored frame counts keep their time. */
+  rates?: (current: Episode) => { from: { num: number; den: number }; to: { num: number; den: number } } | null;
 }) {
   return db().transaction(async (tx) => {
     await lockChannel(tx, channelId);
     const [current] = await tx.select().from(episodes).where(and(eq(episodes.id, id), eq(episodes.channelId, channelId))).limit(1);
     if (!current) return null;
     check?.(current);
+    const change = rates?.(current);
+    if (change) {
+      // The episode row before its rows, as every content write does.
+      await touchEpisode(tx, id);
+      await convertStoredFrames(tx, id, change.from, change.to);
+    }
     const { stage, position, ...fields } = patch;
     const moving = stage !== undefined || position !== undefined;
     const toStage = stage ?? current.stage;

@@ -1,7 +1,7 @@
 import "server-only";
 import { timeScript, DEFAULT_WPM, type SegmentKind } from "../script-timing";
 import { buildChapters } from "../chapters";
-import { formatTimecode, framesToSeconds, rateOf } from "../timecode";
+import { convertFrames, formatTimecode, framesToSeconds, rateOf } from "../timecode";
 import type { FrameRateId } from "../frame-rate";
 import type { Episode } from "../../db/schema";
 import { listSegmentsByEpisode, toSegmentDto, type Segment } from "../../db/queries/script";
@@ -17,8 +17,11 @@ export function scriptView(episode: Episode, segments: Segment[], wpm: number, o
   const rateId = override?.rate ?? episode.frameRate;
   const dropFrame = override?.rate ? Boolean(override.dropFrame) : override?.dropFrame ?? episode.dropFrame;
   const rate = rateOf(rateId, dropFrame && (rateId === "29.97" || rateId === "59.94"));
+  // Pins and fixed lengths are stored in frames at the episode's rate; viewed at another rate they keep their time.
+  const stored = rateOf(episode.frameRate, episode.dropFrame);
+  const at = (f: number | null) => (f == null ? null : convertFrames(f, stored, rate));
   const timing = timeScript(
-    segments.map((s) => ({ id: s.id, kind: s.kind as SegmentKind, text: s.text, stepId: s.stepId, pinnedStartFrame: s.pinnedStartFrame, explicitDurationFrames: s.explicitDurationFrames })),
+    segments.map((s) => ({ id: s.id, kind: s.kind as SegmentKind, text: s.text, stepId: s.stepId, pinnedStartFrame: at(s.pinnedStartFrame), explicitDurationFrames: at(s.explicitDurationFrames) })),
     rate,
     { wpm, targetSeconds: episode.targetRuntimeSeconds },
   );

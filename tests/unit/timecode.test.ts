@@ -3,7 +3,7 @@ import fc from "fast-check";
 // Reference implementation, used only here (devDependency).
 // @ts-expect-error untyped package
 import Timecode from "smpte-timecode";
-import { formatTimecode, framesToSeconds, msToFrames, parseTimecode, rateOf, rulerTicks, type Rate } from "@/lib/timecode";
+import { convertFrames, formatTimecode, framesToSeconds, msToFrames, parseTimecode, rateOf, rulerTicks, type Rate } from "@/lib/timecode";
 import { FRAME_RATE_IDS, FRAME_RATES, type FrameRateId } from "@/lib/frame-rate";
 
 const DF30 = rateOf("29.97", true);
@@ -142,5 +142,29 @@ describe("ruler ticks", () => {
   it("at 25 fps sit on exact seconds", () => {
     const r = rateOf("25");
     expect(rulerTicks(25 * 60, r).map((t) => t.frame)).toEqual([0, 125, 250, 375, 500, 625, 750, 875, 1000, 1125, 1250, 1375, 1500]);
+  });
+});
+
+describe("frames at another rate keep their time", () => {
+  it("matches the drop-frame table: real 10 min and 1 h of 25 fps land on the DF labels of the same clock time", () => {
+    // 00:10:00;00 = 17982 and 01:00:00;00 = 107892 at 30000/1001 DF (SMPTE ST 12-1 worked examples), checked with the smpte-timecode package.
+    const df = rateOf("29.97", true);
+    expect(convertFrames(15000, rateOf("25"), df)).toBe(new Timecode("00:10:00;00", 29.97, true).frameCount);
+    expect(convertFrames(90000, rateOf("25"), df)).toBe(new Timecode("01:00:00;00", 29.97, true).frameCount);
+  });
+
+  it("is within half a frame of the exact instant, and round-trips through a faster rate (fast-check)", () => {
+    const ids = ["23.976", "24", "25", "29.97", "30", "50", "59.94", "60"] as const;
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 5_000_000 }), fc.constantFrom(...ids), fc.constantFrom(...ids), (f, a, b) => {
+        const from = rateOf(a);
+        const to = rateOf(b);
+        const g = convertFrames(f, from, to);
+        const exact = (f * from.den * to.num) / (from.num * to.den);
+        expect(Math.abs(g - exact)).toBeLessThanOrEqual(0.5 + 1e-9);
+        if (to.num / to.den >= from.num / from.den) expect(convertFrames(g, to, from)).toBe(f);
+      }),
+      { numRuns: 2000 },
+    );
   });
 });

@@ -2,6 +2,7 @@ import { json, parseBody, route, sessionUser } from "@/lib/server/api";
 import { assertCan, assertCanMove } from "@/lib/server/access";
 import { loadEpisode } from "@/lib/server/loaders";
 import { AppError } from "@/lib/server/errors";
+import { rateOf } from "@/lib/timecode";
 import { episodeUpdateSchema } from "@/lib/schemas/episode";
 import { archiveEpisode, toEpisodeDto, updateEpisode } from "@/db/queries/episodes";
 import { recordAudit } from "@/db/queries/audit";
@@ -44,6 +45,8 @@ export const PATCH = route<P>(async (req, params) => {
         });
       }
     },
+    // Pins, fixed lengths, B-roll ranges, gaps and clip in/out points keep their time at the new rate.
+    rates: (current) => (patch.frameRate && patch.frameRate !== current.frameRate ? { from: rateOf(current.frameRate), to: rateOf(patch.frameRate) } : null),
   });
   if (!result) throw new AppError("not_found:episode", "No such episode.");
   await recordAudit({
