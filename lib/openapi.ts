@@ -235,6 +235,7 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/segments/{segmentId}/join", summary: `Join the next segment onto this one (${conflictNote})`, body: segmentJoinSchema, response: z.object({ segment: segmentSchema }), errors: [400, 401, 403, 404, 409] },
   { method: "get", path: "/api/me", summary: "Me, with my reading rate", response: z.object({ user: z.object({ id: z.string(), email: z.string(), name: z.string(), readingRateWpm: z.number() }) }), errors: [401] },
   { method: "patch", path: "/api/me", summary: "Set my reading rate (100-220 words a minute)", body: readingRateSchema, response: z.object({ user: z.object({ id: z.string(), readingRateWpm: z.number() }) }), errors: [400, 401] },
+  { method: "delete", path: "/api/me/sessions", summary: "Sign out everywhere: end every session of my account", response: z.object({ ok: z.boolean() }), errors: [401] },
   { method: "get", path: "/api/episodes/{episodeId}/shots", summary: "The shot list", response: z.object({ shots: z.array(shotSchema) }), errors: [401, 404] },
   { method: "post", path: "/api/episodes/{episodeId}/shots", summary: "Add a shot (presenter, producer, editor, owner)", body: shotCreateSchema, response: z.object({ shot: shotSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
   { method: "post", path: "/api/episodes/{episodeId}/shots/bulk", summary: "Set one status on many shots (all or none)", body: shotBulkSchema, response: z.object({ updated: z.number() }), errors: [400, 401, 403, 404] },

@@ -9,3 +9,18 @@ export function SignOutButton({ variant = "primary" }: { variant?: "primary" | "
     </Button>
   );
 }
+
+/** Ends every session of the account (every device), then this one. */
+export function SignOutEverywhereButton() {
+  return (
+    <Button
+      variant="plain"
+      onClick={async () => {
+        await fetch("/api/me/sessions", { method: "DELETE" }).catch(() => null);
+        await signOut({ callbackUrl: "/sign-in" });
+      }}
+    >
+      Sign out everywhere
+    </Button>
+  );
+}

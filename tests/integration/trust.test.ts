@@ -207,3 +207,15 @@ describe("password reset", () => {
     expect(after.status).toBe(401);
   });
 });
+
+describe("sign out everywhere", () => {
+  it("ends every existing session of the account; other people stay signed in", async () => {
+    const meRoute = await import("@/app/api/me/sessions/route");
+    const u = await makeUser("many-devices");
+    expect((await call(channelsRoute.GET as never, { user: u })).status).toBe(200);
+    expect((await call(meRoute.DELETE as never, { method: "DELETE", user: u })).status).toBe(200);
+    expect((await call(channelsRoute.GET as never, { user: u })).status).toBe(401);
+    expect((await call(channelsRoute.GET as never, { user: w.members.editor })).status).toBe(200);
+    expect((await call(meRoute.DELETE as never, { method: "DELETE" })).status).toBe(401);
+  });
+});
