@@ -62,10 +62,9 @@ const WRITES = new Set(["POST", "PUT", "PATCH", "DELETE"]);
  * Refuses a state-changing request that a browser sent from another site
  * (CSRF): Sec-Fetch-Site, when the browser sends it, must say same-origin
  * (or none, for a request the user typed), and Origin, when present, must be
- * this app. A body must come as JSON (or a type the route names), never as
- * text/plain or a form, which other sites can send without asking.
+ * this app.
  */
-export function assertSafeWrite(req: Request, accepts: readonly string[] = ["application/json"]): void {
+export function assertSameOrigin(req: Request): void {
   if (!WRITES.has(req.method)) return;
   const site = req.headers.get("sec-fetch-site");
   if (site && site !== "same-origin" && site !== "none") throw new AppError("forbidden:cross-site", "This request came from another site and was refused.");
@@ -80,6 +79,11 @@ export function assertSafeWrite(req: Request, accepts: readonly string[] = ["app
     const own = new Set([new URL(req.url).host, req.headers.get("host"), req.headers.get("x-forwarded-host"), new URL(env().NEXTAUTH_URL).host].filter(Boolean));
     if (!host || !own.has(host)) throw new AppError("forbidden:cross-site", "This request came from another site and was refused.");
   }
+}
+
+/** A write's body must come as JSON, or as a type the route names; checked once the caller may write at all. */
+export function assertContentType(req: Request, accepts: readonly string[] = ["application/json"]): void {
+  if (!WRITES.has(req.method)) return;
   const length = req.headers.get("content-length");
   const hasBody = req.body !== null && length !== "0";
   if (!hasBody) return;
@@ -91,13 +95,14 @@ export function assertSafeWrite(req: Request, accepts: readonly string[] = ["app
 
 /**
  * Wraps a route handler: errors become the standard error shape, and writes
- * pass the cross-site and content-type checks first. Handlers follow
+ * pass the cross-site check first. Handlers are written with the route
+ * builder (route-builder.ts), which adds the rest. Handlers follow
  * parse → session → load → check → act.
  */
-export function route<P = Record<string, string>>(handler: (req: Request, params: P) => Promise<Response>, opts: { accepts?: readonly string[] } = {}) {
+export function route<P = Record<string, string>>(handler: (req: Request, params: P) => Promise<Response>) {
   return async (req: Request, ctx: Ctx<P>): Promise<Response> => {
     try {
-      assertSafeWrite(req, opts.accepts);
+      assertSameOrigin(req);
       return await handler(req, ctx ? await ctx.params : ({} as P));
     } catch (e) {
       return toResponse(e);

@@ -1,8 +1,6 @@
-import { json, route, sessionUser } from "@/lib/server/api";
+import { json } from "@/lib/server/api";
+import { userRoute } from "@/lib/server/route-builder";
 import { listChannelsByUser } from "@/db/queries/channels";
 
-export const GET = route(async (req) => {
-  const user = await sessionUser(req);
-  const channels = await listChannelsByUser({ userId: user.id });
-  return json({ channels });
-});
+/** The channels the signed-in person is a member of. */
+export const GET = userRoute({}, async ({ user }) => json({ channels: await listChannelsByUser({ userId: user.id }) }));

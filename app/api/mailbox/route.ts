@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { env } from "@/lib/env";
-import { json, parseQuery, parseId, route, sessionUser } from "@/lib/server/api";
+import { json, parseId } from "@/lib/server/api";
+import { userRoute } from "@/lib/server/route-builder";
 import { requireChannel } from "@/lib/server/access";
 import { AppError } from "@/lib/server/errors";
 import { listMailMessagesForChannel } from "@/db/queries/mail";
@@ -8,10 +9,8 @@ import { listMailMessagesForChannel } from "@/db/queries/mail";
 const query = z.object({ channelId: z.string() }).strict();
 
 /** Dev only: what the local SMTP fake received. Off when DEV_MAILBOX=false. */
-export const GET = route(async (req) => {
-  const q = parseQuery(req, query);
+export const GET = userRoute({ query }, async ({ user, query: q }) => {
   if (!env().DEV_MAILBOX) throw new AppError("not_found:mailbox", "The dev mailbox is turned off here.");
-  const user = await sessionUser(req);
   await requireChannel(user.id, parseId(q.channelId, "channel"), "mailbox.read");
   const rows = await listMailMessagesForChannel({ channelId: q.channelId, limit: 100 });
   return json({ messages: rows.map((m) => ({ ...m, receivedAt: m.receivedAt.toISOString() })) });

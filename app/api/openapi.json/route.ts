@@ -1,7 +1,7 @@
+import { publicRoute } from "@/lib/server/route-builder";
 import { openApiDocument } from "@/lib/openapi";
 
 export const dynamic = "force-static";
 
-export function GET() {
-  return Response.json(openApiDocument());
-}
+/** Public: the API's own description. */
+export const GET = publicRoute({}, async () => Response.json(openApiDocument()));

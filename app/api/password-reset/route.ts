@@ -1,5 +1,6 @@
 import { addMinutes } from "date-fns";
-import { json, parseBody, route } from "@/lib/server/api";
+import { json } from "@/lib/server/api";
+import { publicRoute } from "@/lib/server/route-builder";
 import { resetRequestSchema } from "@/lib/schemas/account";
 import { createPasswordReset } from "@/db/queries/auth";
 import { getUserByEmail } from "@/db/queries/users";
@@ -13,8 +14,7 @@ import { assertResetAllowed, clientAddress, recordResetRequest } from "@/lib/ser
  * the time taken does not reveal which accounts exist. Throttled per address
  * asked about and per client.
  */
-export const POST = route(async (req) => {
-  const { email } = await parseBody(req, resetRequestSchema, "password reset");
+export const POST = publicRoute({ body: resetRequestSchema, what: "password reset" }, async ({ req, body: { email } }) => {
   const keys = [`reset:${email.trim().toLowerCase()}`, `reset-from:${clientAddress(req.headers)}`];
   await assertResetAllowed(keys);
   await recordResetRequest(keys);

@@ -1,6 +1,5 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadClip } from "@/lib/server/clip-loader";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { clipUpdateSchema } from "@/lib/schemas/footage";
 import { deleteClipRow, shotInEpisode, toClipDto, updateClip } from "@/db/queries/footage";
 import { abortUpload, deleteObject } from "@/storage/multipart";
@@ -8,21 +7,14 @@ import { presignGet } from "@/storage/presign";
 import { AppError } from "@/lib/server/errors";
 import { settleGaps } from "@/lib/server/coverage-loader";
 
-type P = { clipId: string };
-
 /** The clip with a short-lived playback URL (5 minutes), issued after the permission check. */
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { clip } = await loadClip(user.id, params.clipId);
+export const GET = channelRoute({ load: "clip", action: "channel.read" }, async ({ clip }) => {
   const playbackUrl = clip.state === "stored" ? await presignGet(clip.storageKey, 5 * 60) : null;
   return json({ clip: toClipDto(clip), playbackUrl });
 });
 
-export const PATCH = route<P>(async (req, params) => {
-  const patch = await parseBody(req, clipUpdateSchema, "clip");
-  const user = await sessionUser(req);
-  const { clip, access } = await loadClip(user.id, params.clipId);
-  assertCan(access, "footage.manage");
+export const PATCH = channelRoute({ load: "clip", action: "footage.manage", body: clipUpdateSchema, what: "clip" }, async ({ clip, body }) => {
+  const patch = body;
   if (patch.shotId && !(await shotInEpisode({ shotId: patch.shotId, episodeId: clip.episodeId }))) {
     throw new AppError("unprocessable:clip.shot", "That shot is not on this episode's shot list.", { fields: { shotId: ["not a shot of this episode"] } });
   }
@@ -34,10 +26,7 @@ export const PATCH = route<P>(async (req, params) => {
 });
 
 /** Deleting a clip removes its stored object (or aborts its unfinished upload) and its timeline ranges. */
-export const DELETE = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { clip, access, episode } = await loadClip(user.id, params.clipId);
-  assertCan(access, "footage.manage");
+export const DELETE = channelRoute({ load: "clip", action: "footage.manage" }, async ({ clip, episode }) => {
   if (clip.state === "uploading" && clip.uploadId) await abortUpload(clip.storageKey, clip.uploadId);
   else await deleteObject(clip.storageKey);
   await deleteClipRow({ id: clip.id });

@@ -1,6 +1,6 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
+import { json } from "@/lib/server/api";
 import { assertCan, assertCanMove } from "@/lib/server/access";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
 import { AppError } from "@/lib/server/errors";
 import { rateOf } from "@/lib/timecode";
 import { episodeUpdateSchema } from "@/lib/schemas/episode";
@@ -8,20 +8,10 @@ import { archiveEpisode, toEpisodeDto, updateEpisode } from "@/db/queries/episod
 import { recordAudit } from "@/db/queries/audit";
 import { getMembership } from "@/db/queries/channels";
 
-type P = { episodeId: string };
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => json({ episode: toEpisodeDto(episode) }));
 
-const load = (userId: string, rawId: string) => loadEpisode(userId, rawId);
-
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await load(user.id, params.episodeId);
-  return json({ episode: toEpisodeDto(episode) });
-});
-
-export const PATCH = route<P>(async (req, params) => {
-  const patch = await parseBody(req, episodeUpdateSchema, "episode");
-  const user = await sessionUser(req);
-  const { episode, access } = await load(user.id, params.episodeId);
+/** Edits need episode.edit; a move is checked against the stages (editors move only within editing). */
+export const PATCH = channelRoute({ load: "episode", action: ["episode.edit", "episode.move"], body: episodeUpdateSchema, what: "episode" }, async ({ episode, access, user, body: patch }) => {
   const { stage, position, ...fields } = patch;
   if (Object.keys(fields).length > 0) assertCan(access, "episode.edit");
   if (patch.presenterId && !(await getMembership({ userId: patch.presenterId, channelId: episode.channelId }))) {
@@ -62,10 +52,7 @@ export const PATCH = route<P>(async (req, params) => {
 });
 
 /** Deleting an episode archives it; nothing is destroyed. */
-export const DELETE = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode, access } = await load(user.id, params.episodeId);
-  assertCan(access, "episode.archive");
+export const DELETE = channelRoute({ load: "episode", action: "episode.archive" }, async ({ episode, user }) => {
   const row = await archiveEpisode({ id: episode.id, channelId: episode.channelId, userId: user.id });
   if (!row) throw new AppError("conflict:episode.archived", "This episode is already archived.");
   await recordAudit({ channelId: episode.channelId, userId: user.id, action: "archive", entity: "episode", entityId: episode.id });

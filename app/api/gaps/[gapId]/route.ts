@@ -1,18 +1,9 @@
-import { json, parseBody, parseId, route, sessionUser } from "@/lib/server/api";
-import { requireChannel } from "@/lib/server/access";
+import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/route-builder";
 import { gapUpdateSchema } from "@/lib/schemas/footage";
-import { getGapById, updateGap } from "@/db/queries/coverage";
-import { AppError } from "@/lib/server/errors";
+import { updateGap } from "@/db/queries/coverage";
 
-type P = { gapId: string };
-
-export const PATCH = route<P>(async (req, params) => {
-  const patch = await parseBody(req, gapUpdateSchema, "gap");
-  const user = await sessionUser(req);
-  const id = parseId(params.gapId, "gap");
-  const row = await getGapById({ id });
-  if (!row) throw new AppError("not_found:gap", "No such gap.");
-  await requireChannel(user.id, row.channelId, "coverage.manage", "gap");
-  const after = await updateGap({ id, patch });
+export const PATCH = channelRoute({ load: "gap", action: "coverage.manage", body: gapUpdateSchema, what: "gap" }, async ({ gap, body: patch }) => {
+  const after = await updateGap({ id: gap.id, patch });
   return json({ gap: { id: after!.id, status: after!.status, note: after!.note } });
 });

@@ -1,5 +1,6 @@
 import bcrypt from "bcryptjs";
-import { json, parseBody, route } from "@/lib/server/api";
+import { json } from "@/lib/server/api";
+import { publicRoute } from "@/lib/server/route-builder";
 import { AppError } from "@/lib/server/errors";
 import { invitationAcceptSchema } from "@/lib/schemas/account";
 import { acceptInvitation, getOpenInvitationByTokenHash } from "@/db/queries/auth";
@@ -7,8 +8,7 @@ import { getUserByEmail } from "@/db/queries/users";
 import { hashToken } from "@/lib/server/tokens";
 
 /** Public: the token in the e-mailed link is the credential. */
-export const POST = route(async (req) => {
-  const input = await parseBody(req, invitationAcceptSchema, "invitation");
+export const POST = publicRoute({ body: invitationAcceptSchema, what: "invitation" }, async ({ body: input }) => {
   const tokenHash = hashToken(input.token);
   const inv = await getOpenInvitationByTokenHash({ tokenHash });
   if (!inv) throw new AppError("not_found:invitation", "This invitation link is unknown, already used or expired. Ask the channel owner for a new one.");

@@ -1,18 +1,12 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadMaterial } from "@/lib/server/loaders";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { materialUpdateSchema } from "@/lib/schemas/build";
 import { deleteMaterial, stepIdsOfEpisode, updateMaterial } from "@/db/queries/materials";
 import { materialsView } from "@/lib/server/materials-view";
 import { AppError } from "@/lib/server/errors";
 
-type P = { materialId: string };
-
-export const PATCH = route<P>(async (req, params) => {
-  const patch = await parseBody(req, materialUpdateSchema, "cut-list row");
-  const user = await sessionUser(req);
-  const { material, access } = await loadMaterial(user.id, params.materialId);
-  assertCan(access, "build.edit");
+export const PATCH = channelRoute({ load: "material", action: "build.edit", body: materialUpdateSchema, what: "cut-list row" }, async ({ material, body }) => {
+  const patch = body;
   if (patch.stepId) {
     const steps = await stepIdsOfEpisode({ episodeId: material.episodeId });
     if (!steps.some((s) => s.id === patch.stepId)) throw new AppError("unprocessable:material.step", "That build step is not in this episode.", { fields: { stepId: ["not a step of this episode"] } });
@@ -22,10 +16,7 @@ export const PATCH = route<P>(async (req, params) => {
   return json({ material: materialsView([row]).rows[0] });
 });
 
-export const DELETE = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { material, access } = await loadMaterial(user.id, params.materialId);
-  assertCan(access, "build.edit");
+export const DELETE = channelRoute({ load: "material", action: "build.edit" }, async ({ material }) => {
   await deleteMaterial({ id: material.id, episodeId: material.episodeId });
   return json({ ok: true });
 });

@@ -1,9 +1,9 @@
-import { json, route, sessionUser } from "@/lib/server/api";
+import { json } from "@/lib/server/api";
+import { userRoute } from "@/lib/server/route-builder";
 import { bumpSessionVersion } from "@/db/queries/auth";
 
 /** Sign out everywhere: every session of this account, on every device, ends at its next request. */
-export const DELETE = route(async (req) => {
-  const user = await sessionUser(req);
+export const DELETE = userRoute({}, async ({ user }) => {
   await bumpSessionVersion({ userId: user.id });
   return json({ ok: true });
 });

@@ -1,22 +1,18 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadSegment } from "@/lib/server/segment-loader";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { assertCan } from "@/lib/server/access";
 import { ANNOTATION_FIELDS, segmentSaveSchema } from "@/lib/schemas/script";
 import { deleteSegment, saveSegment, toSegmentDto } from "@/db/queries/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { AppError } from "@/lib/server/errors";
 
-type P = { segmentId: string };
-
 /**
  * Saves a segment. The body names the version it was based on; if someone
  * saved in between, nothing is written and the answer is 409 with the newer
  * segment in error.current, so the writer can merge instead of overwriting.
  */
-export const PATCH = route<P>(async (req, params) => {
-  const save = await parseBody(req, segmentSaveSchema, "segment");
-  const user = await sessionUser(req);
-  const { segment, access } = await loadSegment(user.id, params.segmentId);
+export const PATCH = channelRoute({ load: "segment", action: ["script.write", "script.annotate"], body: segmentSaveSchema, what: "segment" }, async ({ segment, access, user, body }) => {
+  const save = body;
   const { version: _v, ...fields } = save;
   const annotationOnly = Object.keys(fields).every((k) => (ANNOTATION_FIELDS as readonly string[]).includes(k));
   assertCan(access, annotationOnly ? "script.annotate" : "script.write");
@@ -33,10 +29,7 @@ export const PATCH = route<P>(async (req, params) => {
   return json({ segment: toSegmentDto(r.segment) });
 });
 
-export const DELETE = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { segment, access } = await loadSegment(user.id, params.segmentId);
-  assertCan(access, "script.write");
+export const DELETE = channelRoute({ load: "segment", action: "script.write" }, async ({ segment, user }) => {
   await deleteSegment({ id: segment.id, userId: user.id });
   return json({ ok: true });
 });

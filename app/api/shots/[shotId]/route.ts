@@ -1,17 +1,11 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadShot } from "@/lib/server/clip-loader";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { shotUpdateSchema } from "@/lib/schemas/footage";
 import { deleteShot, linksBelong, toShotDto, updateShot } from "@/db/queries/shots";
 import { AppError } from "@/lib/server/errors";
 
-type P = { shotId: string };
-
-export const PATCH = route<P>(async (req, params) => {
-  const patch = await parseBody(req, shotUpdateSchema, "shot");
-  const user = await sessionUser(req);
-  const { shot, access } = await loadShot(user.id, params.shotId);
-  assertCan(access, "shots.edit");
+export const PATCH = channelRoute({ load: "shot", action: "shots.edit", body: shotUpdateSchema, what: "shot" }, async ({ shot, body }) => {
+  const patch = body;
   const wrong = await linksBelong({ episodeId: shot.episodeId, stepId: patch.stepId, segmentId: patch.segmentId });
   if (wrong) throw new AppError("unprocessable:shot.link", "That step or segment is not in this episode.", { fields: { [wrong]: ["not in this episode"] } });
   if (patch.shootDayId) throw new AppError("unprocessable:shot.day", "Shoot days are not scheduled yet.", { fields: { shootDayId: ["not available yet"] } });
@@ -19,10 +13,7 @@ export const PATCH = route<P>(async (req, params) => {
   return json({ shot: toShotDto(row!) });
 });
 
-export const DELETE = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { shot, access } = await loadShot(user.id, params.shotId);
-  assertCan(access, "shots.edit");
+export const DELETE = channelRoute({ load: "shot", action: "shots.edit" }, async ({ shot }) => {
   await deleteShot({ id: shot.id, episodeId: shot.episodeId });
   return json({ ok: true });
 });

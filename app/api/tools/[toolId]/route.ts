@@ -1,19 +1,13 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadTool } from "@/lib/server/loaders";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { toolUpdateSchema } from "@/lib/schemas/build";
 import { archiveTool, sponsorBelongsToChannel, updateTool } from "@/db/queries/tools";
 import { toolDto } from "@/lib/server/plan";
 import { AppError } from "@/lib/server/errors";
 import { claimUpload } from "@/lib/server/uploads";
 
-type P = { toolId: string };
-
-export const PATCH = route<P>(async (req, params) => {
-  const patch = await parseBody(req, toolUpdateSchema, "tool");
-  const user = await sessionUser(req);
-  const { tool, access } = await loadTool(user.id, params.toolId);
-  assertCan(access, "tools.edit");
+export const PATCH = channelRoute({ load: "tool", action: "tools.edit", body: toolUpdateSchema, what: "tool" }, async ({ tool, body }) => {
+  const patch = body;
   if (patch.sponsorId && !(await sponsorBelongsToChannel({ sponsorId: patch.sponsorId, channelId: tool.channelId }))) {
     throw new AppError("unprocessable:tool.sponsor", "That sponsor is not one of this channel's.", { fields: { sponsorId: ["not a sponsor of this channel"] } });
   }
@@ -24,10 +18,7 @@ export const PATCH = route<P>(async (req, params) => {
 });
 
 /** Removing a tool archives it; steps that used it keep the link for the record. */
-export const DELETE = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { tool, access } = await loadTool(user.id, params.toolId);
-  assertCan(access, "tools.edit");
+export const DELETE = channelRoute({ load: "tool", action: "tools.edit" }, async ({ tool }) => {
   const row = await archiveTool({ id: tool.id, channelId: tool.channelId });
   if (!row) throw new AppError("conflict:tool.archived", "This tool is already off the shelf.");
   return json({ ok: true });

@@ -1,6 +1,6 @@
+import { channelRoute } from "@/lib/server/route-builder";
 import { addDays } from "date-fns";
-import { json, parseBody, parseId, route, sessionUser } from "@/lib/server/api";
-import { requireChannel } from "@/lib/server/access";
+import { json } from "@/lib/server/api";
 import { invitationCreateSchema } from "@/lib/schemas/account";
 import { createInvitation, listInvitationsByChannel } from "@/db/queries/auth";
 import { getChannelById } from "@/db/queries/channels";
@@ -9,21 +9,13 @@ import { newToken } from "@/lib/server/tokens";
 import { appUrl, sendMail } from "@/lib/server/mail";
 import { ROLE_LABELS } from "@/lib/roles";
 
-type P = { channelId: string };
-
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const channelId = parseId(params.channelId, "channel");
-  await requireChannel(user.id, channelId, "members.manage");
+export const GET = channelRoute({ load: "channel", action: "members.manage" }, async ({ channelId }) => {
   const rows = await listInvitationsByChannel({ channelId });
   return json({ invitations: rows.map((r) => ({ ...r, expiresAt: r.expiresAt.toISOString(), createdAt: r.createdAt.toISOString() })) });
 });
 
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, invitationCreateSchema, "invitation");
-  const user = await sessionUser(req);
-  const channelId = parseId(params.channelId, "channel");
-  await requireChannel(user.id, channelId, "members.manage");
+export const POST = channelRoute({ load: "channel", action: "members.manage", body: invitationCreateSchema, what: "invitation" }, async ({ channelId, user, body }) => {
+  const input = body;
   const channel = await getChannelById({ id: channelId });
   const { token, hash } = newToken();
   const inv = await createInvitation({ channelId, email: input.email, roles: input.roles, tokenHash: hash, invitedBy: user.id, expiresAt: addDays(new Date(), 7) });

@@ -1,25 +1,17 @@
-import { json, parseBody, parseId, route, sessionUser } from "@/lib/server/api";
-import { requireChannel } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { toolCreateSchema } from "@/lib/schemas/build";
 import { createTool, listToolsByChannel, sponsorBelongsToChannel } from "@/db/queries/tools";
 import { toolDto } from "@/lib/server/plan";
 import { AppError } from "@/lib/server/errors";
 import { claimUpload } from "@/lib/server/uploads";
 
-type P = { channelId: string };
-
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const channelId = parseId(params.channelId, "channel");
-  await requireChannel(user.id, channelId, "channel.read");
+export const GET = channelRoute({ load: "channel", action: "channel.read" }, async ({ channelId }) => {
   return json({ tools: (await listToolsByChannel({ channelId })).map(toolDto) });
 });
 
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, toolCreateSchema, "tool");
-  const user = await sessionUser(req);
-  const channelId = parseId(params.channelId, "channel");
-  await requireChannel(user.id, channelId, "tools.edit");
+export const POST = channelRoute({ load: "channel", action: "tools.edit", body: toolCreateSchema, what: "tool" }, async ({ channelId, body }) => {
+  const input = body;
   if (input.sponsorId && !(await sponsorBelongsToChannel({ sponsorId: input.sponsorId, channelId }))) {
     throw new AppError("unprocessable:tool.sponsor", "That sponsor is not one of this channel's.", { fields: { sponsorId: ["not a sponsor of this channel"] } });
   }

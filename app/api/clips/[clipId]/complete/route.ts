@@ -1,22 +1,16 @@
-import { json, route, sessionUser } from "@/lib/server/api";
-import { loadClip } from "@/lib/server/clip-loader";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { completeUpload, listParts, objectSize } from "@/storage/multipart";
 import { readMediaMeta } from "@/storage/media-info";
 import { finishClip, toClipDto } from "@/db/queries/footage";
 import { AppError } from "@/lib/server/errors";
-
-type P = { clipId: string };
 
 /**
  * Finishes an upload. The server lists the stored parts itself and checks
  * that every part is there with the right size before asking storage to join
  * them; then it reads the clip's metadata with ranged reads.
  */
-export const POST = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { clip, access } = await loadClip(user.id, params.clipId);
-  assertCan(access, "footage.manage");
+export const POST = channelRoute({ load: "clip", action: "footage.manage" }, async ({ clip }) => {
   if (clip.state !== "uploading" || !clip.uploadId || !clip.partSize) throw new AppError("conflict:clip.stored", "This clip has already finished uploading.");
   const partCount = Math.ceil(clip.sizeBytes / clip.partSize);
   const parts = (await listParts(clip.storageKey, clip.uploadId)).sort((a, b) => (a.PartNumber ?? 0) - (b.PartNumber ?? 0));

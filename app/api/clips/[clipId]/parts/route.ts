@@ -1,11 +1,8 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadClip } from "@/lib/server/clip-loader";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { partsRequestSchema } from "@/lib/schemas/footage";
 import { listParts, presignParts } from "@/storage/multipart";
 import { AppError } from "@/lib/server/errors";
-
-type P = { clipId: string };
 
 function uploading(clip: { state: string; uploadId: string | null; partSize: number | null }) {
   if (clip.state !== "uploading" || !clip.uploadId || !clip.partSize) throw new AppError("conflict:clip.stored", "This clip has finished uploading.");
@@ -13,21 +10,15 @@ function uploading(clip: { state: string; uploadId: string | null; partSize: num
 }
 
 /** The parts already in storage, so an interrupted upload resumes where it stopped. */
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { clip, access } = await loadClip(user.id, params.clipId);
-  assertCan(access, "footage.manage");
+export const GET = channelRoute({ load: "clip", action: "footage.manage" }, async ({ clip }) => {
   const { uploadId, partSize } = uploading(clip);
   const parts = await listParts(clip.storageKey, uploadId);
   return json({ partSize, partCount: Math.ceil(clip.sizeBytes / partSize), parts: parts.map((p) => ({ partNumber: p.PartNumber, size: p.Size })) });
 });
 
 /** Signs PUT URLs for parts of this upload (15 minutes); part numbers outside the file are refused. */
-export const POST = route<P>(async (req, params) => {
-  const { partNumbers } = await parseBody(req, partsRequestSchema, "parts");
-  const user = await sessionUser(req);
-  const { clip, access } = await loadClip(user.id, params.clipId);
-  assertCan(access, "footage.manage");
+export const POST = channelRoute({ load: "clip", action: "footage.manage", body: partsRequestSchema, what: "parts" }, async ({ clip, body }) => {
+  const { partNumbers } = body;
   const { uploadId, partSize } = uploading(clip);
   const partCount = Math.ceil(clip.sizeBytes / partSize);
   const bad = partNumbers.filter((n) => n > partCount);

@@ -1,11 +1,7 @@
-import { json, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { listClipsByEpisode, toClipDto } from "@/db/queries/footage";
 
-type P = { episodeId: string };
-
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   return json({ clips: (await listClipsByEpisode({ episodeId: episode.id })).map(toClipDto) });
 });

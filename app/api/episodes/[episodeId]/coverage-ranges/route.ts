@@ -1,5 +1,5 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { coverageRangeSchema } from "@/lib/schemas/footage";
 import { createRange } from "@/db/queries/coverage";
 import { getClipById } from "@/db/queries/footage";
@@ -7,16 +7,12 @@ import { msToFrames, rateOf } from "@/lib/timecode";
 import { settleGaps } from "@/lib/server/coverage-loader";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
 /**
  * Lays B-roll on the script timeline: a clip placed at a frame (its in/out
  * decide the length, unless an end is given), or a marked range.
  */
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, coverageRangeSchema, "coverage range");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "coverage.manage");
+export const POST = channelRoute({ load: "episode", action: "coverage.manage", body: coverageRangeSchema, what: "coverage range" }, async ({ episode, body }) => {
+  const input = body;
   let endFrame = input.endFrame;
   let clipInFrame = 0;
   if (input.clipId) {

@@ -1,13 +1,9 @@
-import { json, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { coverageFor } from "@/lib/server/coverage-loader";
 
-type P = { episodeId: string };
-
 /** The script timeline with B-roll ranges, computed and marked gaps, and voice-over coverage. */
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   const { view, coverage } = await coverageFor(episode);
   const { stillComputed: _s, ...rest } = coverage;
   return json({

@@ -1,17 +1,13 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { gapCreateSchema } from "@/lib/schemas/footage";
 import { createGap } from "@/db/queries/coverage";
 import { linksBelong } from "@/db/queries/shots";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
 /** Marks a gap by hand, or keeps a computed one so it can be dismissed or resolved. */
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, gapCreateSchema, "gap");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "coverage.manage");
+export const POST = channelRoute({ load: "episode", action: "coverage.manage", body: gapCreateSchema, what: "gap" }, async ({ episode, body }) => {
+  const input = body;
   if (await linksBelong({ episodeId: episode.id, segmentId: input.segmentId })) {
     throw new AppError("unprocessable:gap.segment", "That segment is not in this episode.", { fields: { segmentId: ["not in this episode"] } });
   }

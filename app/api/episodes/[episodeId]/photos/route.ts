@@ -1,14 +1,10 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { photoUploadSchema } from "@/lib/schemas/build";
 import { issuePhotoUpload } from "@/lib/server/uploads";
 
-type P = { episodeId: string };
-
 /** Signs a direct upload of one failure photo; the server never carries the bytes. */
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, photoUploadSchema, "photo");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "build.edit");
+export const POST = channelRoute({ load: "episode", action: "build.edit", body: photoUploadSchema, what: "photo" }, async ({ episode, user, body }) => {
+  const input = body;
   return json(await issuePhotoUpload({ channelId: episode.channelId, userId: user.id, purpose: "failure_photo", contentType: input.contentType, size: input.size }), 201);
 });

@@ -1,5 +1,5 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { assertCan } from "@/lib/server/access";
 import { pickupCreateSchema as schema } from "@/lib/schemas/footage";
 import { createPickup, linksBelong, toShotDto } from "@/db/queries/shots";
@@ -7,13 +7,9 @@ import { getGapById } from "@/db/queries/coverage";
 import { formatTimecode, rateOf } from "@/lib/timecode";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
 /** Turns a gap into a pickup shot on the shot list, linked back to the gap and its segment. */
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, schema, "pickup");
-  const user = await sessionUser(req);
-  const { episode, access } = await loadEpisode(user.id, params.episodeId, "coverage.manage");
+export const POST = channelRoute({ load: "episode", action: "coverage.manage", body: schema, what: "pickup" }, async ({ episode, access, body }) => {
+  const input = body;
   assertCan(access, "shots.edit");
   let gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: string | null };
   if (input.gapId) {

@@ -1,24 +1,18 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { segmentCreateSchema } from "@/lib/schemas/script";
 import { createSegment, toSegmentDto } from "@/db/queries/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { scriptViewFor } from "@/lib/server/script-view";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
 /** The script: segments with timing at the episode's rate, totals and chapters. */
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   return json(await scriptViewFor(episode));
 });
 
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, segmentCreateSchema, "segment");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "script.write");
+export const POST = channelRoute({ load: "episode", action: "script.write", body: segmentCreateSchema, what: "segment" }, async ({ episode, user, body }) => {
+  const input = body;
   if (input.stepId && !(await stepIdsOfEpisode({ episodeId: episode.id })).some((s) => s.id === input.stepId)) {
     throw new AppError("unprocessable:segment.step", "That build step is not in this episode.", { fields: { stepId: ["not a step of this episode"] } });
   }

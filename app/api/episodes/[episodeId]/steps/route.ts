@@ -1,5 +1,5 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { stepCreateSchema } from "@/lib/schemas/build";
 import { createStep, listStepsByEpisode } from "@/db/queries/build";
 import { listToolsByChannel } from "@/db/queries/tools";
@@ -8,20 +8,14 @@ import { checkLinks, planView } from "@/lib/server/plan";
 import { AppError } from "@/lib/server/errors";
 import { recordAudit } from "@/db/queries/audit";
 
-type P = { episodeId: string };
-
 /** The build plan: steps with links, cautions and timing, plus every tool it uses. */
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   const [steps, shelf, members] = await Promise.all([listStepsByEpisode({ episodeId: episode.id }), listToolsByChannel({ channelId: episode.channelId }), listMembersByChannel({ channelId: episode.channelId })]);
   return json(await planView(steps, shelf, members.length));
 });
 
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, stepCreateSchema, "build step");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "build.edit");
+export const POST = channelRoute({ load: "episode", action: "build.edit", body: stepCreateSchema, what: "build step" }, async ({ episode, user, body }) => {
+  const input = body;
   if (input.status === "failed") {
     throw new AppError("unprocessable:step.status", "Add the step first, then mark it failed with what went wrong.", { fields: { status: ["mark a step failed through its failure form"] } });
   }

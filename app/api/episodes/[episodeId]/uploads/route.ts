@@ -1,5 +1,5 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { uploadCreateSchema } from "@/lib/schemas/footage";
 import { env } from "@/lib/env";
 import { newObjectKey } from "@/storage/keys";
@@ -7,17 +7,13 @@ import { createUpload, planParts } from "@/storage/multipart";
 import { createClip, shotInEpisode, toClipDto } from "@/db/queries/footage";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
 /**
  * Starts a multipart upload: checks type and size before any byte moves,
  * generates the storage key, and records the clip. The browser then asks for
  * part URLs and PUTs the parts straight to storage.
  */
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, uploadCreateSchema(env().UPLOAD_MAX_BYTES), "upload");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "footage.manage");
+export const POST = channelRoute({ load: "episode", action: "footage.manage", body: () => uploadCreateSchema(env().UPLOAD_MAX_BYTES), what: "upload" }, async ({ episode, user, body }) => {
+  const input = body;
   if (input.shotId && !(await shotInEpisode({ shotId: input.shotId, episodeId: episode.id }))) {
     throw new AppError("unprocessable:upload.shot", "That shot is not on this episode's shot list.", { fields: { shotId: ["not a shot of this episode"] } });
   }

@@ -1,18 +1,12 @@
-import { json, route, sessionUser } from "@/lib/server/api";
-import { loadStep } from "@/lib/server/loaders";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { createShots, listShotsByEpisode, toShotDto } from "@/db/queries/shots";
 import { COVERAGE_LABELS, type CoverageKind } from "@/lib/shot-kinds";
 import { AppError } from "@/lib/server/errors";
 import type { ShotKind } from "@/lib/schemas/footage";
 
-type P = { stepId: string };
-
 /** Creates one planned shot per coverage kind the build step asks for (skipping kinds it already has). */
-export const POST = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { step, access } = await loadStep(user.id, params.stepId);
-  assertCan(access, "shots.edit");
+export const POST = channelRoute({ load: "step", action: "shots.edit" }, async ({ step }) => {
   if (step.coverageKinds.length === 0) throw new AppError("unprocessable:step.coverage", "This step has no planned coverage; tick how to cover it in the build plan first.");
   const existing = (await listShotsByEpisode({ episodeId: step.episodeId })).filter((s) => s.stepId === step.id);
   const missing = step.coverageKinds.filter((k) => !existing.some((s) => s.kind === k));

@@ -1,20 +1,14 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadStep } from "@/lib/server/loaders";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { stepCreateSchema } from "@/lib/schemas/build";
 import { createStep } from "@/db/queries/build";
 import { checkLinks } from "@/lib/server/plan";
 import { AppError } from "@/lib/server/errors";
 import { recordAudit } from "@/db/queries/audit";
 
-type P = { stepId: string };
-
 /** Adds a remedy step right after the failed one; the failed step stays in the plan's history. */
-export const POST = route<P>(async (req, params) => {
-  const input = await parseBody(req, stepCreateSchema, "remedy step");
-  const user = await sessionUser(req);
-  const { step, channelId, access } = await loadStep(user.id, params.stepId);
-  assertCan(access, "build.edit");
+export const POST = channelRoute({ load: "step", action: "build.edit", body: stepCreateSchema, what: "remedy step" }, async ({ step, channelId, user, body }) => {
+  const input = body;
   if (step.status !== "failed") throw new AppError("conflict:step.not-failed", "Only a failed step gets remedies. Mark it failed first.");
   const row = await createStep({
     episodeId: step.episodeId,

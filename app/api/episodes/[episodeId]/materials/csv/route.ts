@@ -1,18 +1,14 @@
-import { json, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { materialCreateSchema, type MaterialCreate } from "@/lib/schemas/build";
 import { createMaterials, listMaterialsByEpisode, stepIdsOfEpisode, toMaterialInput } from "@/db/queries/materials";
 import { parseCsv, recordToBody, toCsv } from "@/lib/cut-list-csv";
 import { AppError } from "@/lib/server/errors";
 import { fileSlug } from "@/lib/file-name";
 
-type P = { episodeId: string };
-
 const MAX_CSV_BYTES = 2 * 1024 * 1024;
 
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   const [rows, steps] = await Promise.all([listMaterialsByEpisode({ episodeId: episode.id }), stepIdsOfEpisode({ episodeId: episode.id })]);
   const title = new Map(steps.map((s) => [s.id, s.title]));
   const csv = toCsv(rows.map(toMaterialInput).map((r) => ({ ...r, stepTitle: r.stepId ? (title.get(r.stepId) ?? null) : null })));
@@ -25,7 +21,7 @@ export const GET = route<P>(async (req, params) => {
  * schema as the API; if any row is wrong nothing is imported and each error
  * names its line and field.
  */
-export const POST = route<P>(async (req, params) => {
+export const POST = channelRoute({ load: "episode", action: "build.edit", accepts: ["text/csv", "application/csv"] }, async ({ episode, req }) => {
   const text = await req.text();
   if (text.length > MAX_CSV_BYTES) throw new AppError("validation:csv", "The file is larger than 2 MB; split it.");
   const nulAt = text.indexOf("\u0000");
@@ -33,8 +29,6 @@ export const POST = route<P>(async (req, params) => {
   const parsed = parseCsv(text);
   if (!parsed.ok) throw new AppError("validation:csv", parsed.message);
   if (parsed.records.length === 0) throw new AppError("validation:csv", "The file has a header but no rows.");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "build.edit");
   const steps = await stepIdsOfEpisode({ episodeId: episode.id });
   const byTitle = new Map(steps.map((s) => [s.title.toLowerCase(), s.id]));
   const fields: Record<string, string[]> = {};
@@ -53,7 +47,7 @@ export const POST = route<P>(async (req, params) => {
   }
   const created = await createMaterials({ episodeId: episode.id, rows });
   return json({ imported: created.length }, 201);
-}, { accepts: ["text/csv", "application/csv"] });
+});
 
 function csvName(field: string): string {
   const map: Record<string, string> = { partName: "part", pricingUnit: "pricing_unit", unitPriceMinor: "unit_price", wastePercent: "waste_percent", stepId: "step", supplierNote: "supplier_note" };

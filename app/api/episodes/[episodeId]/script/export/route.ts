@@ -1,17 +1,13 @@
-import { parseQuery, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { parseQuery } from "@/lib/server/api";
 import { exportQuerySchema } from "@/lib/schemas/script";
 import { scriptViewFor } from "@/lib/server/script-view";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
 import { fileSlug } from "@/lib/file-name";
 
-type P = { episodeId: string };
-
-export const GET = route<P>(async (req, params) => {
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode, req }) => {
   const { format } = parseQuery(req, exportQuerySchema);
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
   const view = await scriptViewFor(episode);
   const steps = new Map((await stepIdsOfEpisode({ episodeId: episode.id })).map((s) => [s.id, s.title]));
   const slug = fileSlug(episode.title);

@@ -1,15 +1,11 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { segmentOrderSchema } from "@/lib/schemas/script";
 import { reorderSegments } from "@/db/queries/script";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
-export const PUT = route<P>(async (req, params) => {
-  const { ids } = await parseBody(req, segmentOrderSchema, "segment order");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "script.write");
+export const PUT = channelRoute({ load: "episode", action: "script.write", body: segmentOrderSchema, what: "segment order" }, async ({ episode, body }) => {
+  const { ids } = body;
   await reorderSegments({
     episodeId: episode.id,
     ids,

@@ -1,12 +1,8 @@
-import { json, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { listRevisionsByEpisode } from "@/db/queries/script";
 
-type P = { episodeId: string };
-
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   const rows = await listRevisionsByEpisode({ episodeId: episode.id });
   return json({ revisions: rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() })) });
 });

@@ -1,20 +1,16 @@
-import { json, parseQuery, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { timingQuerySchema } from "@/lib/schemas/script";
 import { scriptViewFor } from "@/lib/server/script-view";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
 /** Computed timing at a chosen frame rate (?rate=25&dropFrame=false); the episode's rate by default. */
-export const GET = route<P>(async (req, params) => {
-  const q = parseQuery(req, timingQuerySchema);
+export const GET = channelRoute({ load: "episode", action: "channel.read", query: timingQuerySchema }, async ({ episode, query }) => {
+  const q = query;
   const dropFrame = q.dropFrame === "true";
   if (dropFrame && q.rate && q.rate !== "29.97" && q.rate !== "59.94") {
     throw new AppError("validation:query", "Drop-frame exists only at 29.97 and 59.94 fps.", { fields: { dropFrame: ["drop-frame applies only at 29.97 and 59.94 fps"] } });
   }
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
   const view = await scriptViewFor(episode, q.rate ? { rate: q.rate, dropFrame } : q.dropFrame ? { dropFrame } : undefined);
   return json({ rate: view.rate, wordsPerMinute: view.wordsPerMinute, totals: view.totals, chapters: view.chapters, segments: view.segments.map((s) => ({ ...s.timing, id: s.id, kind: s.kind, stepId: s.stepId })) });
 });

@@ -1,15 +1,10 @@
 import Papa from "papaparse";
+import { channelRoute } from "@/lib/server/route-builder";
 import { CSV_EXPORT_OPTIONS } from "@/lib/cut-list-csv";
-import { route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
 import { listShotsByEpisode } from "@/db/queries/shots";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 
-type P = { episodeId: string };
-
-export const GET = route<P>(async (req, params) => {
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId);
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   const [shots, steps] = await Promise.all([listShotsByEpisode({ episodeId: episode.id }), stepIdsOfEpisode({ episodeId: episode.id })]);
   const title = new Map(steps.map((s) => [s.id, s.title]));
   const csv = Papa.unparse({

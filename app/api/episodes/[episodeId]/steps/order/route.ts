@@ -1,15 +1,11 @@
-import { json, parseBody, route, sessionUser } from "@/lib/server/api";
-import { loadEpisode } from "@/lib/server/loaders";
+import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/api";
 import { stepOrderSchema } from "@/lib/schemas/build";
 import { reorderSteps } from "@/db/queries/build";
 import { AppError } from "@/lib/server/errors";
 
-type P = { episodeId: string };
-
-export const PUT = route<P>(async (req, params) => {
-  const { ids } = await parseBody(req, stepOrderSchema, "step order");
-  const user = await sessionUser(req);
-  const { episode } = await loadEpisode(user.id, params.episodeId, "build.edit");
+export const PUT = channelRoute({ load: "episode", action: "build.edit", body: stepOrderSchema, what: "step order" }, async ({ episode, body }) => {
+  const { ids } = body;
   await reorderSteps({
     episodeId: episode.id,
     ids,
