@@ -34,7 +34,7 @@ function routeFiles(dir = API): string[] {
   return fs.readdirSync(dir, { withFileTypes: true }).flatMap((d) => (d.isDirectory() ? routeFiles(path.join(dir, d.name)) : d.name === "route.ts" ? [path.join(dir, d.name)] : []));
 }
 
-let entries: RouteEntry[] = [];
+const entries: RouteEntry[] = [];
 let w: Awaited<ReturnType<typeof makeWorld>>;
 
 beforeAll(async () => {
