@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
-import { touchEpisode } from "./episode-lock";
+import { lockEpisode } from "./episode-lock";
 import { buildSteps, episodes, stepDependencies, stepTools, tools, type BuildStep } from "../schema";
 import type { StepCreate, StepUpdate } from "../../lib/schemas/build";
 import { findCycle } from "../../lib/build-plan";
@@ -90,7 +90,7 @@ export async function createStep({
   check: (ctx: PlanContext) => void;
 }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const ctx = await context(tx, episodeId, channelId);
     check(ctx);
     const { dependsOn, toolIds, ...fields } = input;
@@ -134,7 +134,7 @@ export async function updateStep({
   check: (ctx: PlanContext, current: StepWithLinks) => void;
 }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const ctx = await context(tx, episodeId, channelId);
     const current = ctx.steps.find((s) => s.id === stepId);
     if (!current) return null;
@@ -152,7 +152,7 @@ export async function updateStep({
 
 export async function deleteStep({ stepId, episodeId }: { stepId: string; episodeId: string }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [row] = await tx.delete(buildSteps).where(and(eq(buildSteps.id, stepId), eq(buildSteps.episodeId, episodeId))).returning();
     if (!row) return null;
     // Remedies of a deleted step stay in the plan as ordinary steps.
@@ -166,7 +166,7 @@ export async function deleteStep({ stepId, episodeId }: { stepId: string; episod
 /** Sets the whole order at once; `ids` must be exactly the episode's steps. */
 export async function reorderSteps({ episodeId, ids, check }: { episodeId: string; ids: string[]; check: (current: string[]) => void }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const current = await tx.select({ id: buildSteps.id }).from(buildSteps).where(eq(buildSteps.episodeId, episodeId));
     check(current.map((c) => c.id));
     await renumber(tx, ids);

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, gte, isNotNull, isNull, lt, ne, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
-import { touchEpisode } from "./episode-lock";
+import { lockEpisode } from "./episode-lock";
 import { channels, episodes, type Episode } from "../schema";
 import type { Stage } from "../../lib/stages";
 import type { EpisodeCreate, EpisodeDto, EpisodeUpdate } from "../../lib/schemas/episode";
@@ -149,7 +149,7 @@ export async function updateEpisode({
     const change = rates?.(current);
     if (change) {
       // The episode row before its rows, as every content write does.
-      await touchEpisode(tx, id);
+      await lockEpisode(tx, id);
       await convertStoredFrames(tx, id, change.from, change.to);
     }
     const { stage, position, ...fields } = patch;

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "../client";
-import { touchEpisode } from "./episode-lock";
+import { lockEpisode } from "./episode-lock";
 import { buildSteps, materials, type MaterialRow } from "../schema";
 import type { MaterialCreate, MaterialUpdate } from "../../lib/schemas/build";
 import type { MaterialRowInput, PricingUnit } from "../../lib/materials";
@@ -54,7 +54,7 @@ export async function stepIdsOfEpisode({ episodeId }: { episodeId: string }) {
 /** Inserts rows in one transaction: all of them or none. */
 export async function createMaterials({ episodeId, rows }: { episodeId: string; rows: MaterialCreate[] }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const existing = await tx.select({ id: materials.id }).from(materials).where(eq(materials.episodeId, episodeId));
     if (rows.length === 0) return [];
     return tx
@@ -66,7 +66,7 @@ export async function createMaterials({ episodeId, rows }: { episodeId: string; 
 
 export async function updateMaterial({ id, episodeId, patch }: { id: string; episodeId: string; patch: MaterialUpdate }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [row] = await tx
       .update(materials)
       .set(toDb(patch))
@@ -78,7 +78,7 @@ export async function updateMaterial({ id, episodeId, patch }: { id: string; epi
 
 export async function deleteMaterial({ id, episodeId }: { id: string; episodeId: string }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [row] = await tx.delete(materials).where(and(eq(materials.id, id), eq(materials.episodeId, episodeId))).returning();
     return row ?? null;
   });

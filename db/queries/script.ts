@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
-import { touchEpisode } from "./episode-lock";
+import { lockEpisode } from "./episode-lock";
 import { episodes, scriptRevisions, scriptSegments, users, type ScriptSegment } from "../schema";
 import type { SegmentCreate, SegmentSave } from "../../lib/schemas/script";
 
@@ -71,7 +71,7 @@ async function revision(tx: Tx, episodeId: string, segmentId: string, userId: st
 
 export async function createSegment({ episodeId, userId, input }: { episodeId: string; userId: string; input: SegmentCreate }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const ids = await orderedIds(tx, episodeId);
     const { afterId, ...fields } = input;
     if (afterId && !ids.includes(afterId)) return { error: "after_not_found" as const };
@@ -95,7 +95,7 @@ export async function saveSegment({ id, userId, save }: { id: string; userId: st
   return db().transaction(async (tx) => {
     const episodeId = await episodeOfSegment(tx, id);
     if (!episodeId) return { missing: true as const };
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return { missing: true as const };
     if (current.version !== save.version) return { conflict: current };
@@ -114,7 +114,7 @@ export async function splitSegment({ id, userId, version, before, after }: { id:
   return db().transaction(async (tx) => {
     const episodeId = await episodeOfSegment(tx, id);
     if (!episodeId) return { missing: true as const };
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return { missing: true as const };
     if (current.version !== version) return { conflict: current };
@@ -141,7 +141,7 @@ export async function joinWithNext({ id, userId, version, nextVersion }: { id: s
   return db().transaction(async (tx) => {
     const episodeId = await episodeOfSegment(tx, id);
     if (!episodeId) return { missing: true as const };
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return { missing: true as const };
     const ids = await orderedIds(tx, current.episodeId);
@@ -168,7 +168,7 @@ export async function deleteSegment({ id, userId }: { id: string; userId: string
   return db().transaction(async (tx) => {
     const episodeId = await episodeOfSegment(tx, id);
     if (!episodeId) return null;
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [current] = await tx.select().from(scriptSegments).where(eq(scriptSegments.id, id)).for("update");
     if (!current) return null;
     await tx.delete(scriptSegments).where(eq(scriptSegments.id, id));
@@ -180,7 +180,7 @@ export async function deleteSegment({ id, userId }: { id: string; userId: string
 
 export async function reorderSegments({ episodeId, ids, check }: { episodeId: string; ids: string[]; check: (current: string[]) => void }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     check(await orderedIds(tx, episodeId));
     await renumber(tx, ids);
   });
@@ -218,7 +218,7 @@ export async function restoreRevision({ revisionId, userId }: { revisionId: stri
     if (!rev || !rev.segmentId) return null;
     const state = (rev.after ?? rev.before) as Snapshot | null;
     if (!state) return null;
-    await touchEpisode(tx, rev.episodeId);
+    await lockEpisode(tx, rev.episodeId);
     const fields = {
       kind: state.kind,
       text: state.text,

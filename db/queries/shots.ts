@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "../client";
-import { touchEpisode } from "./episode-lock";
+import { lockEpisode } from "./episode-lock";
 import { buildSteps, episodes, gaps, scriptSegments, shots, type Shot } from "../schema";
 import type { ShotCreate, ShotUpdate, ShotStatus } from "../../lib/schemas/footage";
 
@@ -51,7 +51,7 @@ export async function linksBelong({ episodeId, stepId, segmentId }: { episodeId:
 
 export async function createShots({ episodeId, rows }: { episodeId: string; rows: (ShotCreate & { gapId?: string | null })[] }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const existing = await tx.select({ id: shots.id }).from(shots).where(eq(shots.episodeId, episodeId));
     if (!rows.length) return [];
     return tx
@@ -63,7 +63,7 @@ export async function createShots({ episodeId, rows }: { episodeId: string; rows
 
 export async function updateShot({ id, episodeId, patch }: { id: string; episodeId: string; patch: ShotUpdate }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [row] = await tx.update(shots).set(patch).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
     return row ?? null;
   });
@@ -71,7 +71,7 @@ export async function updateShot({ id, episodeId, patch }: { id: string; episode
 
 export async function deleteShot({ id, episodeId }: { id: string; episodeId: string }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const [row] = await tx.delete(shots).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
     return row ?? null;
   });
@@ -80,7 +80,7 @@ export async function deleteShot({ id, episodeId }: { id: string; episodeId: str
 /** Sets one status on many shots of one episode in one statement; ids of other episodes are not touched. */
 export async function setShotStatus({ episodeId, ids, status }: { episodeId: string; ids: string[]; status: ShotStatus }) {
   return db().transaction(async (tx) => {
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     const found = await tx.select({ id: shots.id }).from(shots).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
     if (found.length !== ids.length) return null;
     await tx.update(shots).set({ status }).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
@@ -102,7 +102,7 @@ export async function createPickup({
 }) {
   return db().transaction(async (tx) => {
     // Under the episode lock, so two clicks on the same gap cannot both make a pickup.
-    await touchEpisode(tx, episodeId);
+    await lockEpisode(tx, episodeId);
     let gapId = gap.id;
     if (!gapId) {
       const [kept] = await tx
