@@ -54,16 +54,25 @@ beforeAll(async () => {
   cookie = await cookieFor(w.members.owner.id);
 }, 60_000);
 
-/** A fast-check arbitrary for values of a JSON Schema, as zod writes them (enough of the vocabulary for our schemas). */
-function arb(s: any, defs: Record<string, any>, depth = 0): fc.Arbitrary<unknown> {
+/**
+ * A fast-check arbitrary for values of a JSON Schema, as zod writes them
+ * (enough of the vocabulary for our schemas). `uuids`, when given, is where
+ * every id in the body comes from.
+ */
+function arb(s: any, defs: Record<string, any>, depth = 0, uuids?: string[]): fc.Arbitrary<unknown> {
   if (!s || depth > 6) return fc.constant(null);
-  if (s.$ref) return arb(defs[s.$ref.replace("#/$defs/", "")], defs, depth + 1);
-  if (s.anyOf || s.oneOf) return fc.oneof(...(s.anyOf ?? s.oneOf).map((x: any) => arb(x, defs, depth + 1)));
+  if (s.$ref) return arb(defs[s.$ref.replace("#/$defs/", "")], defs, depth + 1, uuids);
+  if (s.anyOf || s.oneOf) {
+    const options = (s.anyOf ?? s.oneOf) as any[];
+    // Naming a record is the point: prefer the id branch of "id or null".
+    const ids = options.filter((x) => x.format === "uuid");
+    return uuids && ids.length ? arb(ids[0], defs, depth + 1, uuids) : fc.oneof(...options.map((x: any) => arb(x, defs, depth + 1, uuids)));
+  }
   if (s.enum) return fc.constantFrom(...s.enum);
   if (s.const !== undefined) return fc.constant(s.const);
   switch (s.type) {
     case "string":
-      if (s.format === "uuid") return fc.uuid();
+      if (s.format === "uuid") return uuids ? fc.constantFrom(...uuids) : fc.uuid();
       if (s.format === "email") return fc.emailAddress();
       return fc.string({ minLength: s.minLength ?? 0, maxLength: Math.min(s.maxLength ?? 40, 40) });
     case "integer":
@@ -75,12 +84,15 @@ function arb(s: any, defs: Record<string, any>, depth = 0): fc.Arbitrary<unknown
     case "null":
       return fc.constant(null);
     case "array":
-      return fc.array(arb(s.items ?? {}, defs, depth + 1), { minLength: s.minItems ?? 0, maxLength: Math.min(s.maxItems ?? 3, 3) });
+      return fc.array(arb(s.items ?? {}, defs, depth + 1, uuids), { minLength: Math.max(s.minItems ?? 0, uuids && s.items?.format === "uuid" ? 1 : 0), maxLength: Math.min(s.maxItems ?? 3, 3) });
     case "object": {
       const props = Object.entries(s.properties ?? {});
       if (!props.length) return fc.constant({});
       const required = new Set(s.required ?? []);
-      return fc.record(Object.fromEntries(props.map(([k, v]) => [k, arb(v, defs, depth + 1)])), { requiredKeys: [...required].filter((k) => props.some(([p]) => p === k)) as never[] });
+      // With foreign ids, every id field is sent, so each one is tried.
+      const idField = (v: any) => v?.format === "uuid" || v?.items?.format === "uuid" || (v?.anyOf ?? []).some((x: any) => x.format === "uuid");
+      const keys = [...required, ...(uuids ? props.filter(([, v]) => idField(v)).map(([k]) => k) : [])].filter((k) => props.some(([p]) => p === k));
+      return fc.record(Object.fromEntries(props.map(([k, v]) => [k, arb(v, defs, depth + 1, uuids)])), { requiredKeys: [...new Set(keys)] as never[] });
     }
     default:
       return fc.oneof(fc.string(), fc.integer(), fc.constant(null));
@@ -188,5 +200,35 @@ describe("generated bad-input sweep", () => {
       }
     }
     expect(problems).toEqual([]);
+  }, 300_000);
+
+  it("bodies naming another channel's records are refused and change nothing there", async () => {
+    const foreign = Object.values(await records(w.other.id, w.outsider.id));
+    foreign.push(w.outsider.id);
+    const problems: string[] = [];
+    let named = 0;
+    let refusedForTheId = 0;
+    for (const t of targets) {
+      if (!JSON.stringify(z.toJSONSchema(t.schema, { io: "input", unrepresentable: "any" })).includes('"uuid"')) continue;
+      const ids = await records(w.channel.id, w.members.owner.id);
+      const params: Record<string, string> = {};
+      for (const p of t.params) params[p] = ids[p.replace(/Id$/, "") as LoadKind] ?? (p === "userId" ? w.members.producer.id : crypto.randomUUID());
+      const js = z.toJSONSchema(t.schema, { io: "input", unrepresentable: "any" }) as any;
+      const root = js.$ref ? js.$defs[js.$ref.replace("#/$defs/", "")] : js;
+      for (const body of fc.sample(arb(root, js.$defs ?? {}, 0, foreign), { numRuns: 15, seed: 20261203 })) {
+        const theirs = await snapshot(w.other.id);
+        const req = new Request("http://127.0.0.1/x", { method: t.method, headers: { cookie, "content-type": "application/json" }, body: JSON.stringify(body) });
+        const res = await t.handler(req, { params: Promise.resolve(params) });
+        const theirIds = JSON.stringify(body).match(/[0-9a-f]{8}-[0-9a-f-]{27}/g)?.filter((x) => foreign.includes(x)) ?? [];
+        if (theirIds.length) named += 1;
+        if (theirIds.length && [404, 409, 422].includes(res.status)) refusedForTheId += 1;
+        if (theirIds.length && res.status < 400) problems.push(`${t.label}: accepted another channel's id (${res.status}) in ${JSON.stringify(body).slice(0, 160)}`);
+        if ((await snapshot(w.other.id)) !== theirs) problems.push(`${t.label}: changed another channel's data`);
+      }
+    }
+    expect(problems).toEqual([]);
+    // The sweep really tried: many bodies named foreign records, and many got past validation to be refused for it.
+    expect(named).toBeGreaterThan(100);
+    expect(refusedForTheId).toBeGreaterThan(20);
   }, 300_000);
 });

@@ -7,7 +7,7 @@ import * as scriptRoute from "@/app/api/episodes/[episodeId]/script/route";
 import * as segmentRoute from "@/app/api/segments/[segmentId]/route";
 import * as shotsRoute from "@/app/api/episodes/[episodeId]/shots/route";
 import { db } from "@/db/client";
-import { episodes, shots } from "@/db/schema";
+import { episodes, materials, shots } from "@/db/schema";
 import { call, makeEpisode, makeWorld } from "../support/fixtures";
 
 type World = Awaited<ReturnType<typeof makeWorld>>;
@@ -62,6 +62,14 @@ describe("the episode's updated stamp follows its content", () => {
     const rs = await Promise.all(Array.from({ length: 20 }, (_, i) => call(shotsRoute.POST as never, { method: "POST", params: { episodeId }, user, body: { kind: "broll", description: `Burst ${i}` } })));
     expect(rs.map((r) => r.status)).toEqual(Array(20).fill(201));
     const rows = await db().select({ position: shots.position }).from(shots).where(eq(shots.episodeId, episodeId));
+    expect(new Set(rows.map((r) => r.position)).size).toBe(rows.length);
+  });
+
+  it("gives 20 cut-list rows added at once 20 different positions", async () => {
+    const user = w.members.presenter;
+    const rs = await Promise.all(Array.from({ length: 20 }, (_, i) => call(materialsRoute.POST as never, { method: "POST", params: { episodeId }, user, body: { partName: `Slat ${i}`, thickness: "3/4", width: "2", length: "30" } })));
+    expect(rs.map((r) => r.status)).toEqual(Array(20).fill(201));
+    const rows = await db().select({ position: materials.position }).from(materials).where(eq(materials.episodeId, episodeId));
     expect(new Set(rows.map((r) => r.position)).size).toBe(rows.length);
   });
 });
