@@ -1,4 +1,5 @@
 "use client";
+import { secondsToMinutesText } from "@/lib/schemas/episode";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import type { EpisodeDto } from "@/lib/schemas/episode";
@@ -12,7 +13,26 @@ export function EpisodeEditor({ episode, canEdit, canArchive, channelId }: { epi
   const [error, setError] = useState<string | null>(null);
   const [confirming, setConfirming] = useState(false);
   if (!canEdit) {
-    return <Notice>Your role reads this episode; a presenter, producer or the owner edits it.</Notice>;
+    // Roles that read the episode see its facts as text, not as a locked form.
+    return (
+      <div className="space-y-3" data-testid="episode-facts">
+        <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[max-content_1fr]">
+          <dt className="text-walnut-700">Title</dt>
+          <dd className="font-medium">{episode.title}</dd>
+          <dt className="text-walnut-700">Summary</dt>
+          <dd className="whitespace-pre-wrap">{episode.summary || "—"}</dd>
+          <dt className="text-walnut-700">Target runtime</dt>
+          <dd className="num">{episode.targetRuntimeSeconds != null ? secondsToMinutesText(episode.targetRuntimeSeconds) + " min" : "—"}</dd>
+          <dt className="text-walnut-700">Planned publish date</dt>
+          <dd className="num">{episode.publishDate ?? "—"}</dd>
+          <dt className="text-walnut-700">Frame rate</dt>
+          <dd className="num">
+            {episode.frameRate} fps{episode.dropFrame ? " drop-frame" : ""}
+          </dd>
+        </dl>
+        <p className="text-sm text-walnut-700">Your role reads this episode; a presenter, producer or the owner edits it.</p>
+      </div>
+    );
   }
   return (
     <div className="space-y-4">

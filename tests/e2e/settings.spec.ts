@@ -22,5 +22,10 @@ test("a bad setting is named by its label, and roles that cannot change settings
   await editor.goto(`/c/${channelId}/settings`);
   await expect(editor.getByTestId("settings-read-only")).toContainText("Only the owner changes channel settings.");
   await expect(editor.getByRole("textbox")).toHaveCount(0);
+  // The episode overview reads as facts, not as a locked form.
+  const eps = (await (await editor.request.get(`/api/channels/${channelId}/episodes`)).json()).episodes as { id: string; title: string }[];
+  await editor.goto(`/c/${channelId}/episodes/${eps[0]!.id}`);
+  await expect(editor.getByTestId("episode-facts")).toContainText(eps[0]!.title);
+  await expect(editor.getByTestId("episode-facts").getByRole("textbox")).toHaveCount(0);
   await editorCtx.close();
 });
