@@ -97,7 +97,7 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
           const err = e as SaveError;
           if (err.status === 409 && err.current) {
             const theirs = err.current as SegmentDto;
-            const c = { theirs, mine: textRef.current, merged: proposeMerge(textRef.current, theirs.text) };
+            const c = { theirs, mine: textRef.current, merged: proposeMerge(baseRef.current.text, textRef.current, theirs.text).text };
             conflictRef.current = c;
             setConflict(c);
             report("conflict");
