@@ -1,11 +1,13 @@
 import "server-only";
-import { scriptView, presenterWpm } from "./script-view";
+import { scriptView } from "./script-view";
+import { DEFAULT_WPM } from "../script-timing";
 import { coverageOf } from "./coverage-view";
 import type { Episode } from "../../db/schema";
 import { listSegmentsByEpisodes } from "../../db/queries/script";
 import { listGapsByEpisodes, listRangesByEpisodes } from "../../db/queries/coverage";
 import { getChannelById } from "../../db/queries/channels";
 import { countShotsByEpisodes } from "../../db/queries/shots";
+import { listReadingRatesByUserIds } from "../../db/queries/users";
 
 export interface BoardFigures {
   scriptSeconds: number | null;
@@ -26,8 +28,7 @@ export async function boardFigures(episodes: Episode[]): Promise<Map<string, Boa
     getChannelById({ id: episodes[0]!.channelId }),
     countShotsByEpisodes({ episodeIds: ids }),
   ]);
-  const wpm = new Map<string, number>();
-  for (const e of episodes) if (e.presenterId && !wpm.has(e.presenterId)) wpm.set(e.presenterId, await presenterWpm(e));
+  const wpm = await listReadingRatesByUserIds({ ids: [...new Set(episodes.flatMap((e) => (e.presenterId ? [e.presenterId] : [])))] });
   for (const e of episodes) {
     const mine = segments.filter((s) => s.episodeId === e.id);
     const s = shots.get(e.id) ?? { done: 0, total: 0 };
@@ -35,7 +36,7 @@ export async function boardFigures(episodes: Episode[]): Promise<Map<string, Boa
       out.set(e.id, { scriptSeconds: null, openGaps: null, shotsDone: s.done, shotsTotal: s.total });
       continue;
     }
-    const view = scriptView(e, mine, e.presenterId ? (wpm.get(e.presenterId) ?? 150) : 150);
+    const view = scriptView(e, mine, e.presenterId ? (wpm.get(e.presenterId) ?? DEFAULT_WPM) : DEFAULT_WPM);
     const cov = coverageOf(e, channel!, view, ranges.filter((r) => r.episodeId === e.id), gaps.filter((g) => g.episodeId === e.id));
     out.set(e.id, { scriptSeconds: Math.round(view.totals.seconds), openGaps: cov.openGaps, shotsDone: s.done, shotsTotal: s.total });
   }

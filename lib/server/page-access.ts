@@ -1,10 +1,14 @@
 import "server-only";
+import { cache } from "react";
 import { notFound, redirect } from "next/navigation";
 import { z } from "zod";
 import { currentUser, type SessionUser } from "./session";
 import { getMembership } from "../../db/queries/channels";
 import { can, type Action } from "../permissions";
 import type { Role } from "../roles";
+
+// One lookup per render, however many layouts and pages ask (React cache).
+const membershipOf = cache((userId: string, channelId: string) => getMembership({ userId, channelId }));
 
 export interface PageAccess {
   user: SessionUser;
@@ -19,7 +23,7 @@ export async function pageAccess(channelIdRaw: string, action: Action = "channel
   if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(back)}`);
   const channelId = z.uuid().safeParse(channelIdRaw);
   if (!channelId.success) notFound();
-  const membership = await getMembership({ userId: user.id, channelId: channelId.data });
+  const membership = await membershipOf(user.id, channelId.data);
   if (!membership) notFound();
   return { user, channelId: channelId.data, roles: membership.roles, allowed: can(membership.roles, action) };
 }

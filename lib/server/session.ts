@@ -1,4 +1,5 @@
 import "server-only";
+import { cache } from "react";
 import { decode } from "next-auth/jwt";
 import { env } from "../env";
 import { AppError } from "./errors";
@@ -55,8 +56,12 @@ export async function requireUser(cookieHeader: string | null): Promise<SessionU
   return { id: user.id, email: user.email, name: user.name };
 }
 
-/** For server components and server actions: reads the request's cookies. */
-export async function currentUser(): Promise<SessionUser | null> {
+/**
+ * For server components and server actions: reads the request's cookies.
+ * Memoised for one render (React cache), so a layout and its page ask the
+ * database once.
+ */
+export const currentUser = cache(async function currentUser(): Promise<SessionUser | null> {
   const { headers } = await import("next/headers");
   const h = await headers();
   try {
@@ -64,4 +69,4 @@ export async function currentUser(): Promise<SessionUser | null> {
   } catch {
     return null;
   }
-}
+});
