@@ -1,9 +1,14 @@
 import tseslint from "typescript-eslint";
 import drizzle from "eslint-plugin-drizzle";
+import reactHooks from "eslint-plugin-react-hooks";
+import nextPlugin from "@next/eslint-plugin-next";
 
 export default tseslint.config(
   { ignores: [".next/**", "node_modules/**", ".data/**", ".test-data/**", "tests/.artifacts/**", "db/migrations/**", "next-env.d.ts"] },
   ...tseslint.configs.recommended,
+  // React's rules of hooks and the Next.js rules, as their recommended sets.
+  reactHooks.configs.flat["recommended-latest"] ?? reactHooks.configs.flat.recommended,
+  { plugins: { "@next/next": nextPlugin }, rules: { ...nextPlugin.configs.recommended.rules, ...nextPlugin.configs["core-web-vitals"].rules } },
   {
     plugins: { drizzle },
     rules: {

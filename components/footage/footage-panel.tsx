@@ -92,7 +92,8 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
           ) : null}
           <ul className="space-y-2">
             {uploads.map((u) => {
-              const e = engines.current.get(u.key);
+              // Looked up when clicked, not while rendering.
+              const engine = () => engines.current.get(u.key);
               return (
                 <li key={u.key} className="rounded-plank border border-timber-200 p-2 text-sm" data-testid="upload-row" data-status={u.status}>
                   <div className="flex flex-wrap items-center gap-2">
@@ -105,10 +106,10 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
                       {u.status === "done" ? "Done" : u.status === "paused" ? "Paused" : u.status === "error" ? "Stopped" : u.status === "cancelled" ? "Cancelled" : u.status === "finishing" ? "Finishing…" : u.status === "preparing" ? "Preparing…" : "Uploading"}
                       {u.resumed && u.status !== "cancelled" ? " (resumed)" : ""}
                     </span>
-                    {u.status === "uploading" ? <Button onClick={() => e?.pause()}>Pause</Button> : null}
-                    {u.status === "paused" || u.status === "error" ? <Button onClick={() => void e?.resume()}>Resume</Button> : null}
+                    {u.status === "uploading" ? <Button onClick={() => engine()?.pause()}>Pause</Button> : null}
+                    {u.status === "paused" || u.status === "error" ? <Button onClick={() => void engine()?.resume()}>Resume</Button> : null}
                     {u.status !== "done" && u.status !== "cancelled" ? (
-                      <Button variant="quiet" onClick={() => void e?.cancel()}>
+                      <Button variant="quiet" onClick={() => void engine()?.cancel()}>
                         Cancel
                       </Button>
                     ) : null}

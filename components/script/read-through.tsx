@@ -28,8 +28,8 @@ export function ReadThrough({ items, wpm }: { items: Item[]; wpm: number }) {
   useEffect(() => {
     if (!running) return;
     const item = items[current];
-    if (!item) return setRunning(false);
-    const t = setTimeout(() => (current + 1 < items.length ? setCurrent(current + 1) : setRunning(false)), Math.max(500, item.durationMs));
+    // State changes only from the timer, never synchronously in the effect.
+    const t = setTimeout(() => (item && current + 1 < items.length ? setCurrent(current + 1) : setRunning(false)), item ? Math.max(500, item.durationMs) : 0);
     return () => clearTimeout(t);
   }, [running, current, items]);
 

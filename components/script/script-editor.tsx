@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { createRef, useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { DndContext, KeyboardSensor, PointerSensor, closestCenter, useSensor, useSensors, type DragEndEvent } from "@dnd-kit/core";
 import { SortableContext, arrayMove, sortableKeyboardCoordinates, verticalListSortingStrategy } from "@dnd-kit/sortable";
@@ -43,7 +43,8 @@ export function ScriptEditor(p: Props) {
   const [newStep, setNewStep] = useState("");
   const [newKind, setNewKind] = useState<SegmentKind>("voice_over");
   const [wpm, setWpm] = useState(p.myWpm);
-  const handles = useRef(new Map<string, React.RefObject<SegmentHandle | null>>());
+  // Each segment editor registers its handle through a callback ref (no ref read during render).
+  const handles = useRef(new Map<string, SegmentHandle>());
   const focusNext = useRef<{ id: string; pos: "start" | "end" } | null>(null);
   const refresh = () => qc.invalidateQueries({ queryKey: key });
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }), useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }));
@@ -66,16 +67,13 @@ export function ScriptEditor(p: Props) {
 
   useEffect(() => {
     const f = focusNext.current;
-    if (f && handles.current.get(f.id)?.current) {
-      handles.current.get(f.id)!.current!.focusAt(f.pos);
+    if (f && handles.current.get(f.id)) {
+      handles.current.get(f.id)!.focusAt(f.pos);
       focusNext.current = null;
     }
   });
 
-  const handleFor = (id: string) => {
-    if (!handles.current.has(id)) handles.current.set(id, createRef<SegmentHandle>());
-    return handles.current.get(id)!;
-  };
+  const handleFor = (id: string) => handles.current.get(id);
 
   const fail = (e: unknown) => {
     const err = e as SaveError;
@@ -96,7 +94,7 @@ export function ScriptEditor(p: Props) {
   async function split(id: string, before: string, after: string) {
     const seg = segments.find((s) => s.id === id);
     if (!seg) return;
-    const stored = await handleFor(id).current?.flush();
+    const stored = await handleFor(id)?.flush();
     if (stored === null) return setMessage({ tone: "error", text: "Save or merge this segment before splitting it." });
     try {
       const r = await send<{ first: SegmentDto; second: SegmentDto }>(`/api/segments/${id}/split`, "POST", { version: (stored ?? seg).version, before, after });
@@ -117,8 +115,8 @@ export function ScriptEditor(p: Props) {
     const i = segments.findIndex((s) => s.id === id);
     const prev = segments[i - 1];
     if (!prev) return;
-    const a = await handleFor(prev.id).current?.flush();
-    const b = await handleFor(id).current?.flush();
+    const a = await handleFor(prev.id)?.flush();
+    const b = await handleFor(id)?.flush();
     if (a === null || b === null) return setMessage({ tone: "error", text: "Save or merge both segments before joining them." });
     try {
       await send(`/api/segments/${prev.id}/join`, "POST", { version: (a ?? prev).version, nextVersion: (b ?? segments[i]!).version });
@@ -241,7 +239,10 @@ export function ScriptEditor(p: Props) {
             {segments.map((s, i) => (
               <SegmentEditor
                 key={s.id}
-                ref={handleFor(s.id)}
+                ref={(h) => {
+                  if (h) handles.current.set(s.id, h);
+                  else handles.current.delete(s.id);
+                }}
                 segment={s}
                 index={i}
                 timing={t.segments[i]}
