@@ -1,9 +1,16 @@
-/** Small fetch helper for the auth forms: returns the JSON body or the error shape. */
+import { ApiError, send } from "@/components/fetch-json";
+
+/**
+ * For the auth forms: the shared API helper, as a result instead of a throw.
+ * Sign-in itself speaks next-auth's form protocol, not Jigboard's JSON API.
+ */
 export async function postJson<T = unknown>(url: string, body: unknown): Promise<{ ok: true; data: T } | { ok: false; status: number; message: string; fields?: Record<string, string[]> }> {
-  const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-  const data = await res.json().catch(() => ({}));
-  if (res.ok) return { ok: true, data: data as T };
-  return { ok: false, status: res.status, message: data?.error?.message ?? `Request failed (${res.status})`, fields: data?.error?.fields };
+  try {
+    return { ok: true, data: await send<T>(url, "POST", body) };
+  } catch (e) {
+    const err = e as ApiError;
+    return { ok: false, status: err.status ?? 0, message: err.message, fields: err.fields };
+  }
 }
 
 /** Signs in through next-auth's credentials endpoint, surfacing the throttle's 429 message. */

@@ -1,4 +1,5 @@
 "use client";
+import { send } from "@/components/fetch-json";
 import { signOut } from "next-auth/react";
 import { Button } from "@/components/ui/button";
 
@@ -16,7 +17,7 @@ export function SignOutEverywhereButton() {
     <Button
       variant="plain"
       onClick={async () => {
-        await fetch("/api/me/sessions", { method: "DELETE" }).catch(() => null);
+        await send("/api/me/sessions", "DELETE").catch(() => null);
         await signOut({ callbackUrl: "/sign-in" });
       }}
     >

@@ -9,6 +9,7 @@ import { TableHead } from "@/components/ui/table-head";
 import { InlineEdit } from "@/components/ui/inline-edit";
 import { Notice } from "@/components/ui/field";
 import { api } from "@/components/plan/types";
+import { ApiError, fetchJson } from "@/components/fetch-json";
 
 interface Row {
   id: string;
@@ -156,11 +157,13 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
   async function importFile(file: File) {
     setNotice(null);
     const text = await file.text();
-    const res = await fetch(`/api/episodes/${episodeId}/materials/csv`, { method: "POST", headers: { "content-type": "text/csv" }, body: text });
-    const body = await res.json().catch(() => ({}));
-    if (!res.ok) {
-      const list = body?.error?.fields ? Object.entries(body.error.fields as Record<string, string[]>).map(([k, v]) => `${k}: ${v.join("; ")}`) : undefined;
-      setNotice({ tone: "error", text: body?.error?.message ?? "Import failed.", list });
+    let body: { imported: number };
+    try {
+      body = await fetchJson(`/api/episodes/${episodeId}/materials/csv`, { method: "POST", headers: { "content-type": "text/csv" }, body: text });
+    } catch (e) {
+      const err = e as ApiError;
+      const list = err.fields ? Object.entries(err.fields).map(([k, v]) => `${k}: ${v.join("; ")}`) : undefined;
+      setNotice({ tone: "error", text: err.message || "Import failed.", list });
       return;
     }
     setNotice({ tone: "ok", text: `Imported ${body.imported} rows.` });

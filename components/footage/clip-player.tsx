@@ -1,4 +1,5 @@
 "use client";
+import { send } from "@/components/fetch-json";
 import { useRef, useState } from "react";
 import { formatTimecode, parseTimecode, type Rate } from "@/lib/timecode";
 import { Button } from "@/components/ui/button";
@@ -18,9 +19,12 @@ export function ClipPlayer({ clipId, url, rate, startTimecode, initialIn, initia
   const toFrame = (seconds: number) => Math.floor((seconds * rate.num) / rate.den + 1e-6);
 
   async function save(patch: { inFrame?: number | null; outFrame?: number | null }) {
-    const r = await fetch(`/api/clips/${clipId}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify(patch) });
-    const body = await r.json();
-    if (!r.ok) return setMsg({ tone: "error", text: body.error.message });
+    let body: { clip: { inFrame: number | null; outFrame: number | null } };
+    try {
+      body = await send(`/api/clips/${clipId}`, "PATCH", patch);
+    } catch (e) {
+      return setMsg({ tone: "error", text: (e as Error).message });
+    }
     setIn(body.clip.inFrame);
     setOut(body.clip.outFrame);
     setMsg({ tone: "ok", text: "Saved." });

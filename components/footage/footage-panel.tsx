@@ -1,4 +1,5 @@
 "use client";
+import { fetchJson, send } from "@/components/fetch-json";
 import Link from "next/link";
 import { useRef, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
@@ -39,7 +40,7 @@ function Bar({ value, label }: { value: number; label: string }) {
 export function FootagePanel({ episodeId, channelBase, canManage, shots }: { episodeId: string; channelBase: string; canManage: boolean; shots: { id: string; description: string }[] }) {
   const qc = useQueryClient();
   const key = ["clips", episodeId];
-  const { data } = useQuery({ queryKey: key, queryFn: () => fetch(`/api/episodes/${episodeId}/clips`).then((r) => r.json() as Promise<{ clips: ClipDto[] }>) });
+  const { data } = useQuery({ queryKey: key, queryFn: () => fetchJson<{ clips: ClipDto[] }>(`/api/episodes/${episodeId}/clips`) });
   const [uploads, setUploads] = useState<UploadState[]>([]);
   const engines = useRef(new Map<string, Upload>());
   const [message, setMessage] = useState<string | null>(null);
@@ -173,8 +174,7 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
                       className="max-w-56 rounded-plank border border-timber-300 bg-white px-1 py-0.5"
                       value={c.shotId ?? ""}
                       onChange={async (e) => {
-                        const r = await fetch(`/api/clips/${c.id}`, { method: "PATCH", headers: { "content-type": "application/json" }, body: JSON.stringify({ shotId: e.target.value || null }) });
-                        if (!r.ok) setMessage(((await r.json()) as { error: { message: string } }).error.message);
+                        await send(`/api/clips/${c.id}`, "PATCH", { shotId: e.target.value || null }).catch((err: Error) => setMessage(err.message));
                         await qc.invalidateQueries({ queryKey: key });
                         await qc.invalidateQueries({ queryKey: ["shots", episodeId] });
                       }}
@@ -196,7 +196,7 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
                       variant="quiet"
                       onClick={async () => {
                         if (!window.confirm(`Delete ${c.originalName}? The stored file is removed too.`)) return;
-                        await fetch(`/api/clips/${c.id}`, { method: "DELETE" });
+                        await send(`/api/clips/${c.id}`, "DELETE").catch((err: Error) => setMessage(err.message));
                         await qc.invalidateQueries({ queryKey: key });
                       }}
                     >
