@@ -28,6 +28,11 @@ import {
 import type { Role } from "../lib/roles";
 import type { Stage } from "../lib/stages";
 import type { FrameRateId } from "../lib/frame-rate";
+import type { ToolKind } from "../lib/safety";
+import type { Acquisition, StepStatus } from "../lib/schemas/build";
+import type { PricingUnit } from "../lib/materials";
+import type { SegmentKind } from "../lib/script-timing";
+import type { ShotKind, ShotStatus } from "../lib/schemas/footage";
 
 const id = () => uuid("id").primaryKey().defaultRandom();
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -158,9 +163,9 @@ export const tools = pgTable(
     channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
     name: text("name").notNull(),
     /** hand_tool | power_tool | finish | heat | clamp | measuring | other */
-    kind: text("kind").notNull().default("other"),
+    kind: text("kind").$type<ToolKind>().notNull().default("other"),
     /** bought | gifted | loaned | paid_placement */
-    acquisition: text("acquisition").notNull().default("bought"),
+    acquisition: text("acquisition").$type<Acquisition>().notNull().default("bought"),
     sponsorId: uuid("sponsor_id").references(() => sponsors.id, { onDelete: "set null" }),
     caution: text("caution").notNull().default(""),
     photoKey: text("photo_key"),
@@ -186,7 +191,7 @@ export const buildSteps = pgTable(
     /** Hazards flagged on the step itself (power_tool, finish, fire); tools add their own. */
     hazards: text("hazards").array().notNull().default(sql`'{}'::text[]`),
     /** planned | in_progress | done | failed | skipped */
-    status: text("status").notNull().default("planned"),
+    status: text("status").$type<StepStatus>().notNull().default("planned"),
     failureNote: text("failure_note"),
     failurePhotoKey: text("failure_photo_key"),
     remedyOfStepId: uuid("remedy_of_step_id"),
@@ -231,7 +236,7 @@ export const materials = pgTable(
     quantity: integer("quantity").notNull().default(1),
     sizing: text("sizing").$type<"nominal" | "actual">().notNull().default("actual"),
     /** board_foot | linear_foot | linear_metre | sheet | each */
-    pricingUnit: text("pricing_unit").notNull().default("board_foot"),
+    pricingUnit: text("pricing_unit").$type<PricingUnit>().notNull().default("board_foot"),
     unitPriceMinor: integer("unit_price_minor").notNull().default(0),
     currency: text("currency").notNull().default("USD"),
     wastePercent: numeric("waste_percent", { precision: 5, scale: 2 }).notNull().default("0"),
@@ -249,7 +254,7 @@ export const scriptSegments = pgTable(
     episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
     position: integer("position").notNull(),
     /** to_camera | voice_over | sponsor_read | on_screen_text */
-    kind: text("kind").notNull(),
+    kind: text("kind").$type<SegmentKind>().notNull(),
     text: text("text").notNull().default(""),
     stepId: uuid("step_id").references(() => buildSteps.id, { onDelete: "set null" }),
     pinnedStartFrame: integer("pinned_start_frame"),
@@ -328,11 +333,11 @@ export const gaps = pgTable(
     startFrame: integer("start_frame").notNull(),
     endFrame: integer("end_frame").notNull(),
     /** computed | marked */
-    source: text("source").notNull(),
+    source: text("source").$type<"computed" | "marked">().notNull(),
     /** open | resolved | dismissed */
-    status: text("status").notNull().default("open"),
+    status: text("status").$type<"open" | "resolved" | "dismissed">().notNull().default("open"),
     /** voice_over | to_camera for computed gaps; marked gaps say nothing. */
-    reason: text("reason"),
+    reason: text("reason").$type<"voice_over" | "to_camera">(),
     note: text("note").notNull().default(""),
     createdAt: createdAt(),
   },
@@ -353,13 +358,13 @@ export const shots = pgTable(
     shootDayId: uuid("shoot_day_id").references(() => shootDays.id, { onDelete: "set null" }),
     gapId: uuid("gap_id").references(() => gaps.id, { onDelete: "set null" }),
     position: integer("position").notNull().default(0),
-    kind: text("kind").notNull(),
+    kind: text("kind").$type<ShotKind>().notNull(),
     description: text("description").notNull().default(""),
     framing: text("framing").notNull().default(""),
     cameraNotes: text("camera_notes").notNull().default(""),
     priority: integer("priority").notNull().default(2),
     /** planned | captured | selected | rejected */
-    status: text("status").notNull().default("planned"),
+    status: text("status").$type<ShotStatus>().notNull().default("planned"),
     createdAt: createdAt(),
   },
   (t) => [
@@ -381,7 +386,7 @@ export const clips = pgTable(
     storageKey: text("storage_key").notNull(),
     uploadId: text("upload_id"),
     /** uploading | stored */
-    state: text("state").notNull().default("uploading"),
+    state: text("state").$type<"uploading" | "stored">().notNull().default("uploading"),
     originalName: text("original_name").notNull(),
     sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
     partSize: bigint("part_size", { mode: "number" }),

@@ -10,6 +10,10 @@ import type { NodePgDatabase } from "drizzle-orm/node-postgres";
 import * as schema from "./schema";
 import type { Role } from "../lib/roles";
 import type { Stage } from "../lib/stages";
+import type { StepStatus } from "../lib/schemas/build";
+import type { PricingUnit } from "../lib/materials";
+import type { SegmentKind } from "../lib/script-timing";
+import type { ShotKind, ShotStatus } from "../lib/schemas/footage";
 
 export const DEMO_PASSWORD = "jigboard-demo";
 
@@ -111,7 +115,7 @@ interface SeedStep {
   tools?: string[];
   cover?: string[];
   hazards?: string[];
-  status?: string;
+  status?: StepStatus;
   failure?: string;
   remedyOf?: string;
   notes?: string;
@@ -126,7 +130,7 @@ interface SeedPart {
   l: string;
   qty: number;
   sizing?: "nominal" | "actual";
-  pricing?: string;
+  pricing?: PricingUnit;
   price: number;
   waste?: number;
   step?: string;
@@ -277,7 +281,7 @@ async function seedBuildPlans(tx: SeedTx, channelId: string, episodeIds: Record<
   return allStepIds;
 }
 
-type SeedSegment = [kind: string, step: string | null, text: string, extra?: { chapter?: string; pinSeconds?: number; fixedSeconds?: number; note?: string }];
+type SeedSegment = [kind: SegmentKind, step: string | null, text: string, extra?: { chapter?: string; pinSeconds?: number; fixedSeconds?: number; note?: string }];
 
 /** Invented scripts in the channel's voice, linked to the build steps above. Frame rate 29.97 DF. */
 async function seedScripts(tx: SeedTx, episodeIds: Record<string, string>, stepIds: Record<string, Record<string, string>>, presenterId: string) {
@@ -336,7 +340,7 @@ async function seedShotsAndFootage(tx: SeedTx, channelId: string, episodeIds: Re
   const title = "Outdoor bench from reclaimed decking";
   const episodeId = episodeIds[title]!;
   const steps = stepIds[title]!;
-  const shotRows = [
+  const shotRows: { kind: ShotKind; description: string; stepId?: string; status: ShotStatus; priority: number; framing?: string; cameraNotes?: string }[] = [
     { kind: "broll", description: "Screws coming out of the old boards, close", stepId: steps.strip, status: "selected", priority: 1, framing: "tight, handheld" },
     { kind: "slow_motion", description: "First planer pass: shavings flying", stepId: steps.strip, status: "captured", priority: 1, framing: "side, low", cameraNotes: "120 fps, 50 mm" },
     { kind: "time_lapse", description: "Seat glue-up clamped overnight", stepId: steps.seat, status: "captured", priority: 2, framing: "overhead" },

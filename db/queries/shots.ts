@@ -2,8 +2,8 @@ import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "../client";
 import { lockEpisode } from "./episode-lock";
-import { buildSteps, episodes, gaps, scriptSegments, shots, type Shot } from "../schema";
-import type { ShotCreate, ShotUpdate, ShotStatus } from "../../lib/schemas/footage";
+import { buildSteps, episodes, gaps, scriptSegments, shots, type Gap, type Shot } from "../schema";
+import type { ShotCreate, ShotKind, ShotUpdate, ShotStatus } from "../../lib/schemas/footage";
 
 export function toShotDto(s: Shot) {
   return {
@@ -96,9 +96,9 @@ export async function createPickup({
   kind,
 }: {
   episodeId: string;
-  gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: string | null; note?: string };
+  gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: Gap["reason"]; note?: string };
   description: string;
-  kind: string;
+  kind: ShotKind;
 }) {
   return db().transaction(async (tx) => {
     // Under the episode lock, so two clicks on the same gap cannot both make a pickup.

@@ -21,7 +21,7 @@ export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs"
       key: keep?.id ?? `computed:${c.start}-${c.end}`,
       source: "computed",
       reason: c.reason,
-      status: (keep?.status as GapView["status"]) ?? "open",
+      status: keep?.status ?? "open",
       startFrame: c.start,
       endFrame: c.end,
       startTimecode: tc(c.start),
@@ -33,7 +33,7 @@ export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs"
   });
   const marked: GapView[] = stored
     .filter((g) => g.source === "marked")
-    .map((g) => ({ id: g.id, key: g.id, source: "marked", reason: null, status: g.status as GapView["status"], startFrame: g.startFrame, endFrame: g.endFrame, startTimecode: tc(g.startFrame), endTimecode: tc(g.endFrame), segmentId: g.segmentId, note: g.note, pickupShotId: pickups.get(g.id) ?? null }));
+    .map((g) => ({ id: g.id, key: g.id, source: "marked", reason: null, status: g.status, startFrame: g.startFrame, endFrame: g.endFrame, startTimecode: tc(g.startFrame), endTimecode: tc(g.endFrame), segmentId: g.segmentId, note: g.note, pickupShotId: pickups.get(g.id) ?? null }));
   const gaps = [...computed, ...marked].sort((a, b) => a.startFrame - b.startFrame);
   return {
     thresholds,

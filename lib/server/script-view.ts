@@ -1,5 +1,5 @@
 import "server-only";
-import { timeScript, DEFAULT_WPM, type SegmentKind } from "../script-timing";
+import { timeScript, DEFAULT_WPM } from "../script-timing";
 import { buildChapters } from "../chapters";
 import { convertFrames, formatTimecode, framesToSeconds, rateOf } from "../timecode";
 import type { FrameRateId } from "../frame-rate";
@@ -21,7 +21,7 @@ export function scriptView(episode: Episode, segments: Segment[], wpm: number, o
   const stored = rateOf(episode.frameRate, episode.dropFrame);
   const at = (f: number | null) => (f == null ? null : convertFrames(f, stored, rate));
   const timing = timeScript(
-    segments.map((s) => ({ id: s.id, kind: s.kind as SegmentKind, text: s.text, stepId: s.stepId, pinnedStartFrame: at(s.pinnedStartFrame), explicitDurationFrames: at(s.explicitDurationFrames) })),
+    segments.map((s) => ({ id: s.id, kind: s.kind, text: s.text, stepId: s.stepId, pinnedStartFrame: at(s.pinnedStartFrame), explicitDurationFrames: at(s.explicitDurationFrames) })),
     rate,
     { wpm, targetSeconds: episode.targetRuntimeSeconds },
   );

@@ -11,7 +11,7 @@ import { AppError } from "@/lib/server/errors";
 export const POST = channelRoute({ load: "episode", action: "coverage.manage", body: schema, what: "pickup" }, async ({ episode, access, body }) => {
   const input = body;
   assertCan(access, "shots.edit");
-  let gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: string | null };
+  let gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: "voice_over" | "to_camera" | null };
   if (input.gapId) {
     const row = await getGapById({ id: input.gapId });
     if (!row || row.gap.episodeId !== episode.id) throw new AppError("not_found:gap", "No such gap in this episode.");

@@ -3,7 +3,7 @@ import { parseQuery } from "@/lib/server/api";
 import { exportQuerySchema } from "@/lib/schemas/script";
 import { scriptViewFor } from "@/lib/server/script-view";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
-import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
+import { SEGMENT_KIND_LABELS } from "@/lib/script-timing";
 import { fileSlug } from "@/lib/file-name";
 
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode, req }) => {
@@ -24,7 +24,7 @@ export const GET = channelRoute({ load: "episode", action: "channel.read" }, asy
   const lines = [`${episode.title}`, `${episode.frameRate} fps${view.rate.dropFrame ? " drop-frame" : ""} · runtime ${view.totals.timecode} · ${view.wordsPerMinute} wpm`, ""];
   for (const s of view.segments) {
     const step = s.stepId ? ` · ${steps.get(s.stepId) ?? ""}` : "";
-    lines.push(`[${s.timing.startTimecode} – ${s.timing.endTimecode}] ${SEGMENT_KIND_LABELS[s.kind as SegmentKind]}${step}${s.chapterStart ? ` · chapter: ${s.chapterTitle ?? ""}` : ""}`);
+    lines.push(`[${s.timing.startTimecode} – ${s.timing.endTimecode}] ${SEGMENT_KIND_LABELS[s.kind]}${step}${s.chapterStart ? ` · chapter: ${s.chapterTitle ?? ""}` : ""}`);
     lines.push(s.text, ...(s.editorNotes ? [`(note to the editor: ${s.editorNotes})`] : []), "");
   }
   if (view.chapters.text) lines.push("Chapters", view.chapters.text, "");

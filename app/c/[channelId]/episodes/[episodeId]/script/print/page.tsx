@@ -1,7 +1,7 @@
 import { episodePage } from "@/lib/server/episode-page";
 import { scriptViewFor } from "@/lib/server/script-view";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
-import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
+import { SEGMENT_KIND_LABELS } from "@/lib/script-timing";
 import { PrintButton } from "@/components/print-button";
 
 export const metadata = { title: "Print script" };
@@ -43,7 +43,7 @@ export default async function PrintPage({ params }: { params: Promise<{ channelI
                 {s.timing.endTimecode}
               </td>
               <td className="pr-2 text-xs">
-                {SEGMENT_KIND_LABELS[s.kind as SegmentKind]}
+                {SEGMENT_KIND_LABELS[s.kind]}
                 {s.stepId ? <div className="text-walnut-700">{title.get(s.stepId)}</div> : null}
                 {s.chapterStart ? <div className="font-bold">Chapter: {s.chapterTitle}</div> : null}
               </td>

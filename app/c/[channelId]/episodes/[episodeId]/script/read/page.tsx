@@ -2,7 +2,6 @@ import { episodePage } from "@/lib/server/episode-page";
 import { scriptViewFor } from "@/lib/server/script-view";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { ReadThrough } from "@/components/script/read-through";
-import type { SegmentKind } from "@/lib/script-timing";
 
 export const metadata = { title: "Read-through" };
 
@@ -15,7 +14,7 @@ export default async function ReadPage({ params }: { params: Promise<{ channelId
   return (
     <ReadThrough
       wpm={view.wordsPerMinute}
-      items={view.segments.map((s) => ({ id: s.id, kind: s.kind as SegmentKind, text: s.text, start: s.timing.startTimecode, durationMs: Math.round(s.timing.durationSeconds * 1000), step: s.stepId ? (title.get(s.stepId) ?? null) : null }))}
+      items={view.segments.map((s) => ({ id: s.id, kind: s.kind, text: s.text, start: s.timing.startTimecode, durationMs: Math.round(s.timing.durationSeconds * 1000), step: s.stepId ? (title.get(s.stepId) ?? null) : null }))}
     />
   );
 }

@@ -1,7 +1,7 @@
 import { episodePage } from "@/lib/server/episode-page";
 import { listStepsByEpisode } from "@/db/queries/build";
 import { listShotsByEpisode } from "@/db/queries/shots";
-import { SHOT_KIND_LABELS, SHOT_STATUS_LABELS, type ShotKind, type ShotStatus } from "@/lib/schemas/footage";
+import { SHOT_KIND_LABELS, SHOT_STATUS_LABELS } from "@/lib/schemas/footage";
 import { PrintButton } from "@/components/print-button";
 
 export const metadata = { title: "Print shot list" };
@@ -29,12 +29,12 @@ export default async function ShotPrintPage({ params }: { params: Promise<{ chan
                 <tr key={s.id} className="border-b border-timber-300 align-top">
                   <td className="w-6 py-1">☐</td>
                   <td className="w-8">P{s.priority}</td>
-                  <td className="w-28">{SHOT_KIND_LABELS[s.kind as ShotKind] ?? s.kind}</td>
+                  <td className="w-28">{SHOT_KIND_LABELS[s.kind]}</td>
                   <td>
                     {s.description}
                     {s.framing || s.cameraNotes ? <div className="text-xs text-walnut-700">{[s.framing, s.cameraNotes].filter(Boolean).join(" · ")}</div> : null}
                   </td>
-                  <td className="w-20 text-xs">{SHOT_STATUS_LABELS[s.status as ShotStatus] ?? s.status}</td>
+                  <td className="w-20 text-xs">{SHOT_STATUS_LABELS[s.status]}</td>
                 </tr>
               ))}
             </tbody>
