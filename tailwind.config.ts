@@ -15,6 +15,13 @@ export default {
         chalk: { 700: "#184b6e", 600: "#1f5f8b", 500: "#2a74a8", 100: "#dde9f2" },
         stage: STAGE_COLOURS,
         hazard: { caution: "#ffd100", warning: "#ff7900", danger: "#c8102e" },
+        // Refusals and errors (not safety: hazard colours are only for cautions).
+        fault: { 50: "#fdf3f4", 100: "#fbeaec", 700: "#9b0d23", 900: "#5c0815" },
+        // Done, saved, passing.
+        pass: { 50: "#f1f8f2", 100: "#e7f3e8", 600: "#2f6b3a", 700: "#1d4a26", 900: "#173d1d" },
+        // Needs a look (a merge to make).
+        heed: { 50: "#fff7e8", 600: "#9b5b00", 800: "#6b3f00" },
+        broll: "#2f7a78",
       },
       fontFamily: {
         sans: ['"Space Grotesk"', "system-ui", "sans-serif"],

@@ -109,7 +109,7 @@ export function EpisodeForm({
           Working summary
         </label>
         <textarea id="episode-summary" rows={3} className="mt-1 w-full rounded-plank border border-timber-300 bg-white px-2 py-1.5" {...register("summary")} />
-        {e.summary?.message ? <p className="text-sm text-[#9b0d23]">{e.summary.message}</p> : null}
+        {e.summary?.message ? <p className="text-sm text-fault-700">{e.summary.message}</p> : null}
       </div>
       <TextField
         label="Target runtime (minutes or m:ss)"
@@ -136,7 +136,7 @@ export function EpisodeForm({
         <label htmlFor="episode-drop-frame" className="text-sm">
           Drop-frame timecode {allowsDropFrame(rate) ? "" : "(only at 29.97 and 59.94)"}
         </label>
-        {e.dropFrame?.message ? <p className="text-sm text-[#9b0d23]">{e.dropFrame.message}</p> : null}
+        {e.dropFrame?.message ? <p className="text-sm text-fault-700">{e.dropFrame.message}</p> : null}
       </div>
       {mode === "create" ? (
         <SelectField label="Start in stage" {...register("stage")}>

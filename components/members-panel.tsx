@@ -122,7 +122,7 @@ export function MembersPanel({ channelId, members, invites, manage, selfId }: { 
           >
             <TextField label="E-mail" type="email" {...form.register("email")} error={form.formState.errors.email?.message} />
             <RoleBoxes name="the invitee" value={inviteRoles} onChange={(r) => form.setValue("roles", r, { shouldValidate: true })} />
-            {form.formState.errors.roles ? <p className="text-sm text-[#9b0d23]">{form.formState.errors.roles.message}</p> : null}
+            {form.formState.errors.roles ? <p className="text-sm text-fault-700">{form.formState.errors.roles.message}</p> : null}
             <Button type="submit" variant="primary" disabled={form.formState.isSubmitting}>
               Send invitation
             </Button>

@@ -219,7 +219,7 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
         {status}
       </p>
       {added ? (
-        <div className="flex flex-wrap items-center gap-2 rounded-plank border-l-4 border-[#2f6b3a] bg-[#e7f3e8] px-3 py-2 text-sm text-[#173d1d]" data-testid="board-added">
+        <div className="flex flex-wrap items-center gap-2 rounded-plank border-l-4 border-pass-600 bg-pass-100 px-3 py-2 text-sm text-pass-900" data-testid="board-added">
           <span>
             Added “{added.title}” to {STAGE_INFO[added.stage].step} · {STAGE_INFO[added.stage].label}.
           </span>

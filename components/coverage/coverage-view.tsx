@@ -37,7 +37,7 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
   const laneCount = Math.max(1, ...lanes.map((l) => l + 1));
   const rows = { script: 28, broll: 70, gaps: 112 };
   const H = rows.gaps + laneCount * 22 + 16;
-  const focusable = { tabIndex: 0, className: "outline-none focus:stroke-[#1f5f8b] focus:[stroke-width:3]" };
+  const focusable = { tabIndex: 0, className: "outline-none focus:stroke-chalk-600 focus:[stroke-width:3]" };
   return (
     <svg viewBox={`0 0 ${W} ${H}`} width="100%" role="group" aria-label="Coverage timeline: script, B-roll and gaps" className="min-w-[700px] rounded-plank border border-timber-300 bg-white" data-testid="coverage-timeline">
       {ticks.map((t) => (
@@ -140,10 +140,10 @@ export function CoverageView({ episodeId, base, canManage, canShots, clips }: { 
           </span>
         ))}
         <span className="flex items-center gap-1">
-          <span className="inline-block h-3 w-5 bg-[#2f7a78]" aria-hidden /> B-roll
+          <span className="inline-block h-3 w-5 bg-broll" aria-hidden /> B-roll
         </span>
         <span className="flex items-center gap-1">
-          <span className="inline-block h-3 w-5 border border-dashed border-[#9b0d23] bg-[#fbeaec]" aria-hidden /> gap (marked “!”, or “P” once a pickup shot is planned)
+          <span className="inline-block h-3 w-5 border border-dashed border-fault-700 bg-fault-100" aria-hidden /> gap (marked “!”, or “P” once a pickup shot is planned)
         </span>
       </div>
       {msg ? <Notice tone={msg.tone}>{msg.text}</Notice> : null}

@@ -281,8 +281,8 @@ function AddRow({ episodeId, defaultUnit, currency, steps, onAdded }: { episodeI
   const field = (k: keyof typeof empty, label: string, extra: React.InputHTMLAttributes<HTMLInputElement> = {}) => (
     <label className="text-sm">
       <span className="block text-walnut-800">{label}</span>
-      <input className="w-full rounded-plank border border-timber-300 px-2 py-1 aria-[invalid]:border-[#9b0d23]" value={f[k]} onChange={set(k)} aria-invalid={errors[k] ? true : undefined} {...extra} />
-      {errors[k] ? <span className="block text-xs text-[#9b0d23]">{errors[k]!.join("; ")}</span> : null}
+      <input className="w-full rounded-plank border border-timber-300 px-2 py-1 aria-[invalid]:border-fault-700" value={f[k]} onChange={set(k)} aria-invalid={errors[k] ? true : undefined} {...extra} />
+      {errors[k] ? <span className="block text-xs text-fault-700">{errors[k]!.join("; ")}</span> : null}
     </label>
   );
   return (

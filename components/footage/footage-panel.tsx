@@ -119,7 +119,7 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
                     <Bar value={u.size ? u.sent / u.size : 0} label={`Upload of ${u.name}`} />
                   </div>
                   {u.error ? (
-                    <p role="alert" className="mt-1 text-[#9b0d23]">
+                    <p role="alert" className="mt-1 text-fault-700">
                       {u.error}
                     </p>
                   ) : null}

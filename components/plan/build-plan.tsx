@@ -30,8 +30,8 @@ async function attempt(f: () => Promise<unknown>): Promise<Result> {
 const STATUS_STYLE: Record<string, string> = {
   planned: "border-timber-400 text-walnut-800",
   in_progress: "border-chalk-600 text-chalk-700",
-  done: "border-[#2f6b3a] text-[#1d4a26]",
-  failed: "border-[#9b0d23] text-[#9b0d23]",
+  done: "border-pass-600 text-pass-700",
+  failed: "border-fault-700 text-fault-700",
   skipped: "border-walnut-500 text-walnut-600 line-through",
 };
 
@@ -72,7 +72,7 @@ function StepItem({
       style={{ transform: CSS.Transform.toString(transform), transition }}
       data-testid="build-step"
       data-step-title={step.title}
-      className={`rounded-plank border bg-white ${remedyOf ? "ml-6 border-l-4 border-[#2f6b3a]" : "border-timber-300"} ${step.status === "failed" ? "border-[#9b0d23]" : ""}`}
+      className={`rounded-plank border bg-white ${remedyOf ? "ml-6 border-l-4 border-pass-600" : "border-timber-300"} ${step.status === "failed" ? "border-fault-700" : ""}`}
     >
       <div className="flex items-start gap-2 p-3">
         {canEdit ? (
@@ -86,7 +86,7 @@ function StepItem({
             <h3 className="font-bold">{step.title}</h3>
             <span className={`rounded-plank border px-1.5 text-xs ${STATUS_STYLE[step.status]}`}>{STEP_STATUS_LABELS[step.status]}</span>
             {critical ? <span className="rounded-plank border border-walnut-900 px-1.5 text-xs">critical path</span> : null}
-            {remedyOf ? <span className="text-xs text-[#1d4a26]">Remedy for “{remedyOf.title}”</span> : null}
+            {remedyOf ? <span className="text-xs text-pass-700">Remedy for “{remedyOf.title}”</span> : null}
           </div>
           <p className="flex flex-wrap gap-x-4 text-sm text-walnut-700">
             <span>
@@ -133,8 +133,8 @@ function StepItem({
               </p>
             ))}
           {step.status === "failed" ? (
-            <div className="rounded-plank bg-[#fdf3f4] p-2 text-sm" data-testid="failure-note">
-              <strong className="text-[#9b0d23]">What went wrong:</strong> {step.failureNote}
+            <div className="rounded-plank bg-fault-50 p-2 text-sm" data-testid="failure-note">
+              <strong className="text-fault-700">What went wrong:</strong> {step.failureNote}
               {step.failurePhotoUrl ? (
                 <a className="ml-2 text-chalk-600 underline" href={step.failurePhotoUrl} target="_blank" rel="noreferrer">
                   photo
@@ -224,7 +224,7 @@ function StepItem({
             />
           ) : null}
           {mode === "remedy" ? (
-            <div className="rounded-plank border border-[#2f6b3a] bg-[#f1f8f2] p-3">
+            <div className="rounded-plank border border-pass-600 bg-pass-50 p-3">
               <h4 className="mb-2 text-sm font-bold">Remedy for “{step.title}”</h4>
               <StepForm
                 mode="create"

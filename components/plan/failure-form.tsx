@@ -38,7 +38,7 @@ export function FailureForm({ episodeId, stepId, onDone, onCancel }: { episodeId
   }
 
   return (
-    <form onSubmit={submit} className="space-y-2 rounded-plank border border-[#9b0d23] bg-[#fdf3f4] p-3" aria-label="Mark step failed">
+    <form onSubmit={submit} className="space-y-2 rounded-plank border border-fault-700 bg-fault-50 p-3" aria-label="Mark step failed">
       {error ? <Notice tone="error">{error}</Notice> : null}
       <label className="block text-sm font-medium" htmlFor={`fail-${stepId}`}>
         What went wrong?

@@ -85,7 +85,7 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
           <span className="inline-block h-3 w-5 border-2 border-walnut-900" aria-hidden /> critical path
         </span>
         <span className="flex items-center gap-1">
-          <span className="inline-block h-3 w-5 bg-[#9b0d23]" aria-hidden /> failed step
+          <span className="inline-block h-3 w-5 bg-fault-700" aria-hidden /> failed step
         </span>
         <span>Axis: elapsed time from the first step, not clock time.</span>
       </figcaption>

@@ -168,7 +168,7 @@ export function StepForm({
                 </label>
               ))}
             </div>
-            {e.dependsOn?.message ? <p className="text-sm text-[#9b0d23]">{e.dependsOn.message}</p> : null}
+            {e.dependsOn?.message ? <p className="text-sm text-fault-700">{e.dependsOn.message}</p> : null}
           </fieldset>
           <fieldset className="sm:col-span-2">
             <legend className="text-sm font-medium text-walnut-800">Tools used</legend>
@@ -182,7 +182,7 @@ export function StepForm({
                 </label>
               ))}
             </div>
-            {e.toolIds?.message ? <p className="text-sm text-[#9b0d23]">{e.toolIds.message}</p> : null}
+            {e.toolIds?.message ? <p className="text-sm text-fault-700">{e.toolIds.message}</p> : null}
           </fieldset>
         </>
       ) : null}

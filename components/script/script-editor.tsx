@@ -185,7 +185,7 @@ export function ScriptEditor(p: Props) {
           Runtime <span className="num text-base font-bold">{formatTimecode(t.totalFrames, rate)}</span>
         </span>
         {t.targetFrames != null ? (
-          <span data-testid="runtime-vs-target" className={over! > 0 ? "text-[#9b0d23]" : "text-[#1d4a26]"}>
+          <span data-testid="runtime-vs-target" className={over! > 0 ? "text-fault-700" : "text-pass-700"}>
             {over === 0 ? "exactly on target" : `${signedSeconds(over!, rate)} ${over! > 0 ? "over" : "under"} the target of ${formatTimecode(t.targetFrames, rate)}`}
           </span>
         ) : (
@@ -315,7 +315,7 @@ export function ScriptEditor(p: Props) {
           ) : (
             <p className="text-sm text-walnut-700">Tick “Chapter starts here” on at least three segments, the first at the very start.</p>
           )}
-          <p className={`mt-1 text-sm ${live.chapters.valid ? "text-[#1d4a26]" : "text-[#9b0d23]"}`}>
+          <p className={`mt-1 text-sm ${live.chapters.valid ? "text-pass-700" : "text-fault-700"}`}>
             {live.chapters.valid ? "Meets the platform's chapter rule." : [...live.chapters.problems, ...live.chapters.chapters.flatMap((c) => c.problems.map((x) => `${c.title || "untitled"}: ${x}`))].join(" · ")}
           </p>
         </div>

@@ -190,7 +190,7 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
         </p>
         <p className="num text-walnut-600">{timing ? `${secs(timing.duration, rate)} s · ${timing.words} w` : ""}</p>
         {driftText ? (
-          <p className={`rounded-plank border px-1 ${drift === 0 ? "border-[#2f6b3a] text-[#1d4a26]" : "border-[#9b5b00] text-[#6b3f00]"}`} data-testid="drift">
+          <p className={`rounded-plank border px-1 ${drift === 0 ? "border-pass-600 text-pass-700" : "border-heed-600 text-heed-800"}`} data-testid="drift">
             Drift: {driftText}
           </p>
         ) : null}
@@ -296,12 +296,12 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
           </p>
         )}
         {fieldError ? (
-          <p role="alert" className="text-sm text-[#9b0d23]">
+          <p role="alert" className="text-sm text-fault-700">
             {fieldError}
           </p>
         ) : null}
         {conflict ? (
-          <div className="space-y-2 rounded-plank border-2 border-[#9b5b00] bg-[#fff7e8] p-2 text-sm" data-testid="conflict" role="group" aria-label="Merge two versions">
+          <div className="space-y-2 rounded-plank border-2 border-heed-600 bg-heed-50 p-2 text-sm" data-testid="conflict" role="group" aria-label="Merge two versions">
             <p className="font-medium">Someone else saved this segment while you were writing. Nothing was overwritten. Choose what to keep:</p>
             <div className="grid gap-2 sm:grid-cols-2">
               <div>
@@ -351,7 +351,7 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
             />
           ) : null}
           {chapterProblems.map((p) => (
-            <span key={p} className="rounded-plank border border-[#9b0d23] px-1 text-xs text-[#9b0d23]" data-testid="chapter-problem">
+            <span key={p} className="rounded-plank border border-fault-700 px-1 text-xs text-fault-700" data-testid="chapter-problem">
               Chapter: {p}
             </span>
           ))}

@@ -6,7 +6,7 @@ const styles: Record<Variant, string> = {
   primary: "bg-chalk-600 text-white hover:bg-chalk-700 border border-chalk-700",
   plain: "bg-white text-walnut-900 border border-timber-300 hover:bg-timber-100",
   quiet: "bg-transparent text-walnut-800 hover:bg-timber-100 border border-transparent",
-  danger: "bg-white text-[#9b0d23] border border-[#9b0d23] hover:bg-[#fbeaec]",
+  danger: "bg-white text-fault-700 border border-fault-700 hover:bg-fault-100",
 };
 
 export const Button = forwardRef<HTMLButtonElement, React.ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }>(

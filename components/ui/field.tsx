@@ -3,7 +3,7 @@ import { forwardRef, useId } from "react";
 export function FieldError({ id, message }: { id: string; message?: string }) {
   if (!message) return null;
   return (
-    <p id={id} className="mt-1 text-sm text-[#9b0d23]" role="alert">
+    <p id={id} className="mt-1 text-sm text-fault-700" role="alert">
       {message}
     </p>
   );
@@ -24,7 +24,7 @@ export const TextField = forwardRef<HTMLInputElement, InputProps>(function TextF
         id={id}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${id}-err` : undefined}
-        className="mt-1 w-full rounded-plank border border-timber-300 bg-white px-2 py-1.5 text-walnut-900 aria-[invalid]:border-[#9b0d23]"
+        className="mt-1 w-full rounded-plank border border-timber-300 bg-white px-2 py-1.5 text-walnut-900 aria-[invalid]:border-fault-700"
         {...props}
       />
       <FieldError id={`${id}-err`} message={error} />
@@ -59,9 +59,9 @@ export const SelectField = forwardRef<HTMLSelectElement, SelectProps>(function S
 export function Notice({ tone = "info", children }: { tone?: "info" | "error" | "ok"; children: React.ReactNode }) {
   const cls =
     tone === "error"
-      ? "border-[#9b0d23] bg-[#fbeaec] text-[#5c0815]"
+      ? "border-fault-700 bg-fault-100 text-fault-900"
       : tone === "ok"
-        ? "border-[#2f6b3a] bg-[#e7f3e8] text-[#173d1d]"
+        ? "border-pass-600 bg-pass-100 text-pass-900"
         : "border-chalk-600 bg-chalk-100 text-chalk-700";
   return (
     <div role={tone === "error" ? "alert" : "status"} className={`rounded-plank border-l-4 px-3 py-2 text-sm ${cls}`}>

@@ -43,7 +43,7 @@ export function InlineEdit({
         autoFocus
         aria-label={label}
         aria-invalid={error ? true : undefined}
-        className="w-full min-w-16 rounded-plank border border-chalk-600 px-1 aria-[invalid]:border-[#9b0d23]"
+        className="w-full min-w-16 rounded-plank border border-chalk-600 px-1 aria-[invalid]:border-fault-700"
         value={draft}
         onChange={(e) => setDraft(e.target.value)}
         onBlur={save}
@@ -53,7 +53,7 @@ export function InlineEdit({
         }}
       />
       {error ? (
-        <span role="alert" className="block text-xs text-[#9b0d23]">
+        <span role="alert" className="block text-xs text-fault-700">
           {error}
         </span>
       ) : null}

@@ -28,6 +28,12 @@ describe("colour tokens meet WCAG 2.2 AA", () => {
     }
     expect(ratio("#ffffff", c.chalk[600])).toBeGreaterThanOrEqual(4.5); // primary button
     expect(ratio(c.timber[100], c.walnut[900])).toBeGreaterThanOrEqual(4.5); // header links
+    // Refusals, passes and merge prompts, as the notices pair them.
+    expect(ratio(c.fault[700], "#ffffff")).toBeGreaterThanOrEqual(4.5);
+    expect(ratio(c.fault[900], c.fault[100])).toBeGreaterThanOrEqual(4.5);
+    expect(ratio(c.pass[900], c.pass[100])).toBeGreaterThanOrEqual(4.5);
+    expect(ratio(c.pass[700], "#ffffff")).toBeGreaterThanOrEqual(4.5);
+    expect(ratio(c.heed[800], c.heed[50])).toBeGreaterThanOrEqual(4.5);
   });
 
   it("focus rings: 3:1 against what they sit on (1.4.11, 2.4.7)", () => {
