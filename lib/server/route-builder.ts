@@ -29,6 +29,16 @@ async function channelOf(userId: string, rawId: string | undefined) {
   return { access, channelId };
 }
 
+/** A loader for a row that carries its channel id: missing, or another channel's, is "not found". */
+function byChannelRow<R extends { channelId: string }, O>(code: string, what: string, get: (q: { id: string }) => Promise<R | null>, pick: (row: R) => O) {
+  return async (userId: string, raw: string | undefined) => {
+    const row = await get({ id: parseId(raw, what) });
+    if (!row) throw new AppError(`not_found:${code}`, `No such ${what}.`);
+    const access = await requireChannel(userId, row.channelId, "channel.read", what);
+    return { access, channelId: row.channelId, ...pick(row) };
+  };
+}
+
 /** Each loader resolves the path's id through the caller's memberships; another channel's record is "not found". */
 export const LOADERS = {
   channel: { param: "channelId", load: channelOf },
@@ -81,33 +91,9 @@ export const LOADERS = {
       return { access, channelId: access.channelId, shot };
     },
   },
-  gap: {
-    param: "gapId",
-    load: async (userId: string, raw: string | undefined) => {
-      const row = await getGapById({ id: parseId(raw, "gap") });
-      if (!row) throw new AppError("not_found:gap", "No such gap.");
-      const access = await requireChannel(userId, row.channelId, "channel.read", "gap");
-      return { access, channelId: row.channelId, gap: row.gap };
-    },
-  },
-  range: {
-    param: "rangeId",
-    load: async (userId: string, raw: string | undefined) => {
-      const row = await getRangeById({ id: parseId(raw, "coverage range") });
-      if (!row) throw new AppError("not_found:coverage range", "No such coverage range.");
-      const access = await requireChannel(userId, row.channelId, "channel.read", "coverage range");
-      return { access, channelId: row.channelId, range: row.range };
-    },
-  },
-  revision: {
-    param: "revisionId",
-    load: async (userId: string, raw: string | undefined) => {
-      const row = await getRevisionById({ id: parseId(raw, "revision") });
-      if (!row) throw new AppError("not_found:revision", "No such revision.");
-      const access = await requireChannel(userId, row.channelId, "channel.read", "revision");
-      return { access, channelId: row.channelId, revision: row.revision };
-    },
-  },
+  gap: { param: "gapId", load: byChannelRow("gap", "gap", getGapById, (r) => ({ gap: r.gap })) },
+  range: { param: "rangeId", load: byChannelRow("coverage range", "coverage range", getRangeById, (r) => ({ range: r.range })) },
+  revision: { param: "revisionId", load: byChannelRow("revision", "revision", getRevisionById, (r) => ({ revision: r.revision })) },
 } as const;
 
 export type LoadKind = keyof typeof LOADERS;

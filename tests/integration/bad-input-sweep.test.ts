@@ -6,49 +6,31 @@
  * JSON and the wrong content type. No answer may be a 5xx, and a refused
  * request must leave the channel's data exactly as it was.
  */
-import fs from "node:fs";
-import path from "node:path";
 import crypto from "node:crypto";
 import fc from "fast-check";
 import { z } from "zod";
 import { sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
-import { buildSteps, clips, coverageRanges, gaps, materials, scriptRevisions, scriptSegments, shots, tools } from "@/db/schema";
-import type { BuiltSpec, LoadKind } from "@/lib/server/route-builder";
-import { cookieFor, makeEpisode, makeWorld } from "../support/fixtures";
+import { cookieFor, makeWorld } from "../support/fixtures";
+import { listRoutes, paramsFor, recordsOfEveryKind, type RouteEntry } from "../support/routes";
 
-const API = path.join(process.cwd(), "app", "api");
-type Built = ((req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>) & { spec?: BuiltSpec };
-interface Target {
+interface Target extends RouteEntry {
   label: string;
-  method: string;
-  handler: Built;
-  params: string[];
   schema: z.ZodType;
 }
 
-function routeFiles(dir = API): string[] {
-  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((d) => (d.isDirectory() ? routeFiles(path.join(dir, d.name)) : d.name === "route.ts" ? [path.join(dir, d.name)] : []));
-}
-
-// Routes that mail or talk to storage on success are still swept; these only change who may sign in, so they are left to their own tests.
+// These change who may sign in, and have their own tests; the sweep leaves them alone.
 const SKIP = new Set(["POST password-reset/route.ts", "POST password-reset/confirm/route.ts", "POST invitations/accept/route.ts"]);
 const targets: Target[] = [];
 let w: Awaited<ReturnType<typeof makeWorld>>;
 let cookie = "";
 
 beforeAll(async () => {
-  for (const abs of routeFiles()) {
-    const file = path.relative(API, abs);
-    if (file.startsWith("auth/")) continue;
-    const mod = (await import(/* @vite-ignore */ abs)) as Record<string, Built>;
-    for (const method of ["POST", "PUT", "PATCH", "DELETE"]) {
-      const h = mod[method];
-      const schema = h?.spec?.body;
-      if (!h || !schema || SKIP.has(`${method} ${file}`)) continue;
-      targets.push({ label: `${method} ${file}`, method, handler: h, params: [...file.matchAll(/\[(\w+)\]/g)].map((m) => m[1]!), schema });
-    }
+  for (const e of await listRoutes((file) => file.startsWith("auth/"))) {
+    const schema = e.handler.spec?.body;
+    const label = `${e.method} ${e.file}`;
+    if (e.method !== "GET" && schema && !SKIP.has(label)) targets.push({ ...e, label, schema });
   }
   w = await makeWorld();
   cookie = await cookieFor(w.members.owner.id);
@@ -141,21 +123,6 @@ function probes(schema: z.ZodType): fc.Arbitrary<Probe> {
   );
 }
 
-async function records(channelId: string, userId: string) {
-  const episode = await makeEpisode(channelId, "planning", 0, `Sweep ${crypto.randomUUID().slice(0, 6)}`);
-  const [step] = await db().insert(buildSteps).values({ episodeId: episode.id, title: "Rip", position: 0 }).returning();
-  const [material] = await db().insert(materials).values({ episodeId: episode.id, partName: "Rail", thickness: "1", width: "2", length: "30", position: 0 }).returning();
-  const [tool] = await db().insert(tools).values({ channelId, name: "Rasp" }).returning();
-  const [segment] = await db().insert(scriptSegments).values({ episodeId: episode.id, position: 0, kind: "voice_over", text: "One.", updatedBy: userId }).returning();
-  const [shot] = await db().insert(shots).values({ episodeId: episode.id, kind: "broll", description: "Dust", position: 0 }).returning();
-  const [clip] = await db().insert(clips).values({ channelId, episodeId: episode.id, storageKey: `channel/${channelId}/footage/${crypto.randomUUID()}.mp4`, originalName: "A.mp4", sizeBytes: 10, contentType: "video/mp4", createdBy: userId }).returning();
-  const [gap] = await db().insert(gaps).values({ episodeId: episode.id, startFrame: 0, endFrame: 50, source: "marked", status: "open" }).returning();
-  const [range] = await db().insert(coverageRanges).values({ episodeId: episode.id, startFrame: 0, endFrame: 25 }).returning();
-  const [revision] = await db().insert(scriptRevisions).values({ episodeId: episode.id, segmentId: segment!.id, userId, before: null, after: { text: "One." } }).returning();
-  const ids: Record<LoadKind, string> = { channel: channelId, episode: episode.id, step: step!.id, material: material!.id, tool: tool!.id, segment: segment!.id, clip: clip!.id, shot: shot!.id, gap: gap!.id, range: range!.id, revision: revision!.id };
-  return ids;
-}
-
 /** Everything the sweep's channel owns, hashed table by table (other test files write to other channels meanwhile). */
 async function snapshot(channelId: string) {
   const r = await db().execute(sql`
@@ -186,9 +153,8 @@ describe("generated bad-input sweep", () => {
   it("never answers 5xx, and a refused request changes nothing", async () => {
     const problems: string[] = [];
     for (const t of targets) {
-      const ids = await records(w.channel.id, w.members.owner.id);
-      const params: Record<string, string> = {};
-      for (const p of t.params) params[p] = ids[p.replace(/Id$/, "") as LoadKind] ?? (p === "userId" ? w.members.producer.id : crypto.randomUUID());
+      const { ids, invitationId } = await recordsOfEveryKind(w.channel.id, w.members.owner.id);
+      const params = paramsFor(t, ids, { invitationId, userId: w.members.producer.id });
       const samples = fc.sample(probes(t.schema), { numRuns: 12, seed: 20261202 });
       for (const probe of samples) {
         const before = await snapshot(w.channel.id);
@@ -203,16 +169,15 @@ describe("generated bad-input sweep", () => {
   }, 300_000);
 
   it("bodies naming another channel's records are refused and change nothing there", async () => {
-    const foreign = Object.values(await records(w.other.id, w.outsider.id));
+    const foreign: string[] = Object.values((await recordsOfEveryKind(w.other.id, w.outsider.id)).ids);
     foreign.push(w.outsider.id);
     const problems: string[] = [];
     let named = 0;
     let refusedForTheId = 0;
     for (const t of targets) {
       if (!JSON.stringify(z.toJSONSchema(t.schema, { io: "input", unrepresentable: "any" })).includes('"uuid"')) continue;
-      const ids = await records(w.channel.id, w.members.owner.id);
-      const params: Record<string, string> = {};
-      for (const p of t.params) params[p] = ids[p.replace(/Id$/, "") as LoadKind] ?? (p === "userId" ? w.members.producer.id : crypto.randomUUID());
+      const { ids, invitationId } = await recordsOfEveryKind(w.channel.id, w.members.owner.id);
+      const params = paramsFor(t, ids, { invitationId, userId: w.members.producer.id });
       const js = z.toJSONSchema(t.schema, { io: "input", unrepresentable: "any" }) as any;
       const root = js.$ref ? js.$defs[js.$ref.replace("#/$defs/", "")] : js;
       for (const body of fc.sample(arb(root, js.$defs ?? {}, 0, foreign), { numRuns: 15, seed: 20261203 })) {
