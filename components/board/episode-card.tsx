@@ -121,7 +121,7 @@ export function EpisodeCard({
             </span>
           </p>
           {/* Progress figures: label above value, so a long figure never runs into its neighbour. The sponsor figure comes with sponsor deals. */}
-          <dl className="mt-1.5 grid grid-cols-3 gap-x-2 rounded-plank border border-timber-200 px-1.5 py-1 text-xs">
+          <dl className="mt-1.5 grid grid-cols-[1.4fr_1fr_0.8fr] gap-x-1.5 rounded-plank border border-timber-200 px-1.5 py-1 text-xs">
             {[
               ["Script", scriptTitle(episode), scriptFigure(episode)],
               ["Shots", "Shots captured of planned", episode.shotsTotal ? `${episode.shotsDone}/${episode.shotsTotal}` : "—"],

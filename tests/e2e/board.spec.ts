@@ -137,3 +137,15 @@ test("owner invites a person who reads the mail, joins and signs in", async ({ p
   await shot(p2, "board-new-editor");
   await guest.close();
 });
+
+test("card figures fit their cells on a 1280 px laptop (nothing cut off or running into the next label)", async ({ browser }) => {
+  const ctx = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const page = await ctx.newPage();
+  await new SignInPage(page).signIn("owner@jigboard.example");
+  await expect(page.getByTestId("episode-card").first()).toBeVisible();
+  const clipped = await page.evaluate(() =>
+    [...document.querySelectorAll<HTMLElement>('[data-testid^="card-"]')].filter((el) => el.scrollWidth > el.clientWidth + 1).map((el) => `${el.dataset.testid}: ${el.textContent}`),
+  );
+  expect(clipped).toEqual([]);
+  await ctx.close();
+});
