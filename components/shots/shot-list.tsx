@@ -27,6 +27,20 @@ interface Shot {
 
 const col = createColumnHelper<Shot>();
 
+/** A choice from a fixed list: a select for those who may change it, its label as text for the rest. */
+function ChoiceCell<T extends string>({ canEdit, label, value, options, labels, onChange }: { canEdit: boolean; label: string; value: T; options: readonly T[]; labels: Record<T, string>; onChange: (v: T) => void }) {
+  if (!canEdit) return <>{labels[value]}</>;
+  return (
+    <select aria-label={label} className="jb-tap rounded-plank border border-timber-300 bg-white px-1" value={value} onChange={(e) => onChange(e.target.value as T)}>
+      {options.map((o) => (
+        <option key={o} value={o}>
+          {labels[o]}
+        </option>
+      ))}
+    </select>
+  );
+}
+
 export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: string; base: string; canEdit: boolean; steps: { id: string; title: string; coverageKinds: string[] }[] }) {
   const qc = useQueryClient();
   const key = useMemo(() => ["shots", episodeId], [episodeId]);
@@ -81,18 +95,7 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
       col.accessor("priority", { header: "Pri", cell: (c) => <InlineEdit canEdit={canEdit} label={`priority of ${c.row.original.description}`} value={String(c.getValue())} onSave={(v) => patch(c.row.original.id, { priority: Number(v) }).then(() => null)} /> }),
       col.accessor("kind", {
         header: "Kind",
-        cell: (c) =>
-          canEdit ? (
-            <select aria-label={`Kind of ${c.row.original.description}`} className="jb-tap rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { kind: e.target.value })}>
-              {SHOT_KINDS.map((k) => (
-                <option key={k} value={k}>
-                  {SHOT_KIND_LABELS[k]}
-                </option>
-              ))}
-            </select>
-          ) : (
-            SHOT_KIND_LABELS[c.getValue()]
-          ),
+        cell: (c) => <ChoiceCell canEdit={canEdit} label={`Kind of ${c.row.original.description}`} value={c.getValue()} options={SHOT_KINDS} labels={SHOT_KIND_LABELS} onChange={(kind) => void patch(c.row.original.id, { kind })} />,
       }),
       col.accessor("description", { header: "What it shows", cell: (c) => <InlineEdit canEdit={canEdit} label={`description of ${c.getValue()}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { description: v }).then(() => null)} /> }),
       col.accessor((s) => (s.stepId ? (stepTitle.get(s.stepId) ?? "") : ""), { id: "step", header: "Build step" }),
@@ -100,18 +103,7 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
       col.accessor("cameraNotes", { header: "Camera and lens", cell: (c) => <InlineEdit canEdit={canEdit} label={`camera notes of ${c.row.original.description}`} value={c.getValue()} onSave={(v) => patch(c.row.original.id, { cameraNotes: v }).then(() => null)} /> }),
       col.accessor("status", {
         header: "Status",
-        cell: (c) =>
-          canEdit ? (
-            <select aria-label={`Status of ${c.row.original.description}`} className="jb-tap rounded-plank border border-timber-300 bg-white px-1" value={c.getValue()} onChange={(e) => void patch(c.row.original.id, { status: e.target.value })}>
-              {SHOT_STATUSES.map((s) => (
-                <option key={s} value={s}>
-                  {SHOT_STATUS_LABELS[s]}
-                </option>
-              ))}
-            </select>
-          ) : (
-            SHOT_STATUS_LABELS[c.getValue()]
-          ),
+        cell: (c) => <ChoiceCell canEdit={canEdit} label={`Status of ${c.row.original.description}`} value={c.getValue()} options={SHOT_STATUSES} labels={SHOT_STATUS_LABELS} onChange={(status) => void patch(c.row.original.id, { status })} />,
       }),
       col.display({ id: "gap", header: "From gap", cell: (c) => (c.row.original.gapId ? "yes" : "") }),
     ];
