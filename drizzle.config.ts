@@ -1,10 +1,11 @@
 import { defineConfig } from "drizzle-kit";
+import { databaseConfig } from "./db/config";
 
 export default defineConfig({
   dialect: "postgresql",
   schema: "./db/schema.ts",
   out: "./db/migrations",
-  dbCredentials: { url: process.env.DATABASE_URL ?? "postgres://jigboard@127.0.0.1:54329/jigboard" },
+  dbCredentials: { url: databaseConfig().url },
   strict: true,
   verbose: false,
 });

@@ -1,5 +1,5 @@
 import { redirect } from "next/navigation";
-import { currentUser } from "@/lib/server/session";
+import { currentUser } from "@/lib/server/access/session";
 import { listChannelsByUser } from "@/db/queries/channels";
 import { SignOutButton } from "@/components/auth/sign-out-button";
 

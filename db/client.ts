@@ -1,17 +1,19 @@
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import pg from "pg";
 import * as schema from "./schema";
-import { env } from "../lib/env";
+import { databaseConfig } from "./config";
 
 export type Db = NodePgDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+/** Either the pool or an open transaction: what a query runs on. */
+export type Q = Db | Tx;
 
 // One pool per process, kept on globalThis so dev reloads do not leak pools.
 const g = globalThis as unknown as { __jigboardPool?: pg.Pool; __jigboardDb?: Db };
 
 export function pool(): pg.Pool {
   if (!g.__jigboardPool) {
-    g.__jigboardPool = new pg.Pool({ connectionString: env().DATABASE_URL, max: env().DATABASE_POOL_MAX });
+    g.__jigboardPool = new pg.Pool({ connectionString: databaseConfig().url, max: databaseConfig().poolMax });
     g.__jigboardPool.on("error", (err) => console.error("[db] idle client error", err.message));
   }
   return g.__jigboardPool;

@@ -10,10 +10,10 @@ import path from "node:path";
 import crypto from "node:crypto";
 import { drizzle } from "drizzle-orm/node-postgres";
 import pg from "pg";
-import { demoPutObject, startLocalServices } from "../lib/server/local-services";
+import { demoPutObject, startLocalServices } from "../lib/server/local/services";
 import { seedDemo } from "../db/seed";
 import * as schema from "../db/schema";
-import { buildIsStale } from "../lib/server/build-check";
+import { buildIsStale } from "../lib/server/local/build-check";
 
 const root = process.cwd();
 const dataRoot = path.join(root, ".test-data");
@@ -113,7 +113,7 @@ async function main() {
         const b = spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env: { ...env, NODE_ENV: "production" } });
         if (b.status !== 0) throw new Error("next build failed");
       }
-      app = spawn(process.execPath, [path.join(root, "lib", "server", "serve.mjs"), "127.0.0.1", String(appPort)], {
+      app = spawn(process.execPath, [path.join(root, "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(appPort)], {
         env: { ...env, NODE_ENV: "production" },
         stdio: ["ignore", fs.openSync(path.join(artifacts, "app.log"), "w"), fs.openSync(path.join(artifacts, "app.err.log"), "w")],
         detached: true,

@@ -14,8 +14,8 @@ import { drizzle } from "drizzle-orm/node-postgres";
 import pg from "pg";
 import { encode } from "next-auth/jwt";
 import { S3Client, CreateMultipartUploadCommand, UploadPartCommand, CompleteMultipartUploadCommand, DeleteObjectCommand } from "@aws-sdk/client-s3";
-import { startLocalServices } from "../../lib/server/local-services";
-import { buildIsStale } from "../../lib/server/build-check";
+import { startLocalServices } from "../../lib/server/local/services";
+import { buildIsStale } from "../../lib/server/local/build-check";
 import * as schema from "../../db/schema";
 
 const SIZE = Number(process.env.BENCH_UPLOAD_BYTES ?? 2 * 1024 ** 3);
@@ -69,7 +69,7 @@ export async function uploadBench() {
     const env = { ...process.env, ...services.env, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: `http://127.0.0.1:${PORT}`, UPLOAD_PART_BYTES: String(PART), NODE_ENV: "production" as const, NEXT_TELEMETRY_DISABLED: "1" };
     const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
     if (buildIsStale(root)) spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env });
-    app = spawn(process.execPath, [path.join(root, "lib", "server", "serve.mjs"), "127.0.0.1", String(PORT)], { env, stdio: "ignore" });
+    app = spawn(process.execPath, [path.join(root, "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(PORT)], { env, stdio: "ignore" });
     for (let i = 0; i < 200; i++) {
       if (await fetch(`http://127.0.0.1:${PORT}/api/health`).then((r) => r.ok).catch(() => false)) break;
       await new Promise((r) => setTimeout(r, 250));

@@ -7,7 +7,7 @@ import path from "node:path";
 import crypto from "node:crypto";
 import { db } from "../../db/client";
 import { buildSteps, clips, coverageRanges, gaps, invitations, materials, scriptRevisions, scriptSegments, shots, tools } from "../../db/schema";
-import type { BuiltSpec, LoadKind } from "../../lib/server/route-builder";
+import type { BuiltSpec, LoadKind } from "../../lib/server/http/route-builder";
 import { makeEpisode } from "./fixtures";
 
 export const API = path.join(process.cwd(), "app", "api");

@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it, vi } from "vitest";
-import { dropUntrustedForwarding } from "@/lib/server/forwarding.mjs";
-import { accountDelaySeconds, ACCOUNT_MAX_DELAY_SECONDS, clientAddress, signInKeys } from "@/lib/server/rate-limit";
+import { dropUntrustedForwarding } from "@/lib/server/http/forwarding.mjs";
+import { accountDelaySeconds, ACCOUNT_MAX_DELAY_SECONDS, clientAddress, signInKeys } from "@/lib/server/infra/rate-limit";
 import { resetEnvCache } from "@/lib/env";
 
 afterEach(() => {

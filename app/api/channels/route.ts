@@ -1,5 +1,5 @@
-import { json } from "@/lib/server/api";
-import { userRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/http/api";
+import { userRoute } from "@/lib/server/http/route-builder";
 import { listChannelsByUser } from "@/db/queries/channels";
 
 /** The channels the signed-in person is a member of. */

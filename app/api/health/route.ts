@@ -1,4 +1,4 @@
-import { publicRoute } from "@/lib/server/route-builder";
+import { publicRoute } from "@/lib/server/http/route-builder";
 import { pingDatabase } from "@/db/queries/health";
 import { storageHealthy } from "@/storage/s3";
 

@@ -1,9 +1,9 @@
 import { z } from "zod";
 import { env } from "@/lib/env";
-import { json, parseId } from "@/lib/server/api";
-import { userRoute } from "@/lib/server/route-builder";
-import { requireChannel } from "@/lib/server/access";
-import { AppError } from "@/lib/server/errors";
+import { json, parseId } from "@/lib/server/http/api";
+import { userRoute } from "@/lib/server/http/route-builder";
+import { requireChannel } from "@/lib/server/access/access";
+import { AppError } from "@/lib/server/http/errors";
 import { listMailMessagesForChannel } from "@/db/queries/mail";
 
 const query = z.object({ channelId: z.string() }).strict();

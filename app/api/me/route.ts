@@ -1,5 +1,5 @@
-import { json } from "@/lib/server/api";
-import { userRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/http/api";
+import { userRoute } from "@/lib/server/http/route-builder";
 import { readingRateSchema } from "@/lib/schemas/script";
 import { setReadingRate, getUserById } from "@/db/queries/users";
 

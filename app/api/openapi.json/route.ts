@@ -1,4 +1,4 @@
-import { publicRoute } from "@/lib/server/route-builder";
+import { publicRoute } from "@/lib/server/http/route-builder";
 import { openApiDocument } from "@/lib/openapi";
 
 export const dynamic = "force-static";

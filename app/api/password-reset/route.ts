@@ -1,12 +1,12 @@
 import { addMinutes } from "date-fns";
-import { json } from "@/lib/server/api";
-import { publicRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/http/api";
+import { publicRoute } from "@/lib/server/http/route-builder";
 import { resetRequestSchema } from "@/lib/schemas/account";
 import { createPasswordReset } from "@/db/queries/auth";
 import { getUserByEmail } from "@/db/queries/users";
-import { newToken } from "@/lib/server/tokens";
-import { appUrl, sendMail } from "@/lib/server/mail";
-import { assertResetAllowed, clientAddress, recordResetRequest } from "@/lib/server/rate-limit";
+import { newToken } from "@/lib/server/infra/tokens";
+import { appUrl, sendMail } from "@/lib/server/infra/mail";
+import { assertResetAllowed, clientAddress, recordResetRequest } from "@/lib/server/infra/rate-limit";
 
 /**
  * Always answers the same, and does the same work either way: one token, one

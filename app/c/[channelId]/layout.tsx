@@ -1,4 +1,4 @@
-import { pageAccess } from "@/lib/server/page-access";
+import { pageAccess } from "@/lib/server/access/page-access";
 import { listChannelsByUser } from "@/db/queries/channels";
 import { AppHeader } from "@/components/app-header";
 import { env } from "@/lib/env";

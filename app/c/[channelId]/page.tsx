@@ -1,7 +1,7 @@
-import { pageAccess } from "@/lib/server/page-access";
+import { pageAccess } from "@/lib/server/access/page-access";
 import { listEpisodesByChannel, toEpisodeDto } from "@/db/queries/episodes";
 import { Board } from "@/components/board/board";
-import { boardFigures } from "@/lib/server/board-figures";
+import { boardFigures } from "@/lib/server/views/board-figures";
 
 export const metadata = { title: "Episodes" };
 

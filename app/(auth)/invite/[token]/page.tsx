@@ -1,6 +1,6 @@
 import { InviteForm } from "@/components/auth/invite-form";
 import { getOpenInvitationByTokenHash } from "@/db/queries/auth";
-import { hashToken } from "@/lib/server/tokens";
+import { hashToken } from "@/lib/server/infra/tokens";
 import { ROLE_LABELS } from "@/lib/roles";
 
 export const metadata = { title: "Invitation" };

@@ -1,7 +1,7 @@
 import NextAuth from "next-auth";
-import { authOptions } from "@/lib/server/auth";
-import { assertSignInAllowed, clientAddress, signInKeys } from "@/lib/server/rate-limit";
-import { toResponse } from "@/lib/server/errors";
+import { authOptions } from "@/lib/server/infra/auth";
+import { assertSignInAllowed, clientAddress, signInKeys } from "@/lib/server/infra/rate-limit";
+import { toResponse } from "@/lib/server/http/errors";
 import { env } from "@/lib/env";
 
 type Ctx = { params: Promise<{ nextauth: string[] }> };

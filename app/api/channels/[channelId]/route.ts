@@ -1,5 +1,5 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { channelUpdateSchema } from "@/lib/schemas/account";
 import { getChannelById, updateChannel } from "@/db/queries/channels";
 import { recordAudit } from "@/db/queries/audit";

@@ -1,11 +1,11 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { clipUpdateSchema } from "@/lib/schemas/footage";
 import { deleteClipRow, shotInEpisode, toClipDto, updateClip } from "@/db/queries/footage";
 import { abortUpload, deleteObject } from "@/storage/multipart";
 import { presignGet } from "@/storage/presign";
-import { AppError } from "@/lib/server/errors";
-import { settleGaps } from "@/lib/server/coverage-loader";
+import { AppError } from "@/lib/server/http/errors";
+import { settleGaps } from "@/lib/server/services/coverage";
 
 /** The clip with a short-lived playback URL (5 minutes), issued after the permission check. */
 export const GET = channelRoute({ load: "clip", action: "channel.read" }, async ({ clip }) => {

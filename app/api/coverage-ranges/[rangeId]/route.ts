@@ -1,8 +1,8 @@
-import { json } from "@/lib/server/api";
-import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/http/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
 import { deleteRange } from "@/db/queries/coverage";
 import { getEpisodeById } from "@/db/queries/episodes";
-import { settleGaps } from "@/lib/server/coverage-loader";
+import { settleGaps } from "@/lib/server/services/coverage";
 
 export const DELETE = channelRoute({ load: "range", action: "coverage.manage" }, async ({ range }) => {
   await deleteRange({ id: range.id });

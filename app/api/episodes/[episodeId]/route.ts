@@ -1,7 +1,7 @@
-import { json } from "@/lib/server/api";
-import { assertCan, assertCanMove } from "@/lib/server/access";
-import { channelRoute } from "@/lib/server/route-builder";
-import { AppError } from "@/lib/server/errors";
+import { json } from "@/lib/server/http/api";
+import { assertCan, assertCanMove } from "@/lib/server/access/access";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { AppError } from "@/lib/server/http/errors";
 import { rateOf } from "@/lib/timecode";
 import { episodeUpdateSchema } from "@/lib/schemas/episode";
 import { archiveEpisode, toEpisodeDto, updateEpisode } from "@/db/queries/episodes";

@@ -1,5 +1,5 @@
-import { json } from "@/lib/server/api";
-import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/http/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
 import { gapUpdateSchema } from "@/lib/schemas/footage";
 import { updateGap } from "@/db/queries/coverage";
 

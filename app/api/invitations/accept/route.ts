@@ -1,11 +1,11 @@
 import bcrypt from "bcryptjs";
-import { json } from "@/lib/server/api";
-import { publicRoute } from "@/lib/server/route-builder";
-import { AppError } from "@/lib/server/errors";
+import { json } from "@/lib/server/http/api";
+import { publicRoute } from "@/lib/server/http/route-builder";
+import { AppError } from "@/lib/server/http/errors";
 import { invitationAcceptSchema } from "@/lib/schemas/account";
 import { acceptInvitation, getOpenInvitationByTokenHash } from "@/db/queries/auth";
 import { getUserByEmail } from "@/db/queries/users";
-import { hashToken } from "@/lib/server/tokens";
+import { hashToken } from "@/lib/server/infra/tokens";
 
 /** Public: the token in the e-mailed link is the credential. */
 export const POST = publicRoute({ body: invitationAcceptSchema, what: "invitation" }, async ({ body: input }) => {

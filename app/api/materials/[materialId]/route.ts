@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { materialUpdateSchema } from "@/lib/schemas/build";
 import { deleteMaterial, stepIdsOfEpisode, updateMaterial } from "@/db/queries/materials";
-import { materialsView } from "@/lib/server/materials-view";
-import { AppError } from "@/lib/server/errors";
+import { materialsView } from "@/lib/server/views/materials";
+import { AppError } from "@/lib/server/http/errors";
 
 export const PATCH = channelRoute({ load: "material", action: "build.edit", body: materialUpdateSchema, what: "cut-list row" }, async ({ material, body }) => {
   const patch = body;

@@ -1,5 +1,5 @@
-import { json } from "@/lib/server/api";
-import { userRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/http/api";
+import { userRoute } from "@/lib/server/http/route-builder";
 import { bumpSessionVersion } from "@/db/queries/auth";
 
 /** Sign out everywhere: every session of this account, on every device, ends at its next request. */

@@ -1,10 +1,10 @@
 import bcrypt from "bcryptjs";
-import { json } from "@/lib/server/api";
-import { publicRoute } from "@/lib/server/route-builder";
-import { AppError } from "@/lib/server/errors";
+import { json } from "@/lib/server/http/api";
+import { publicRoute } from "@/lib/server/http/route-builder";
+import { AppError } from "@/lib/server/http/errors";
 import { resetConfirmSchema } from "@/lib/schemas/account";
 import { consumePasswordReset } from "@/db/queries/auth";
-import { hashToken } from "@/lib/server/tokens";
+import { hashToken } from "@/lib/server/infra/tokens";
 
 /** Public: the token in the e-mailed link is the credential. */
 export const POST = publicRoute({ body: resetConfirmSchema, what: "password reset" }, async ({ body: input }) => {

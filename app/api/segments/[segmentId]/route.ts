@@ -1,10 +1,10 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
+import { assertCan } from "@/lib/server/access/access";
 import { ANNOTATION_FIELDS, segmentSaveSchema } from "@/lib/schemas/script";
 import { deleteSegment, saveSegment, toSegmentDto } from "@/db/queries/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /**
  * Saves a segment. The body names the version it was based on; if someone

@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { shotUpdateSchema } from "@/lib/schemas/footage";
 import { deleteShot, linksBelong, toShotDto, updateShot } from "@/db/queries/shots";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 export const PATCH = channelRoute({ load: "shot", action: "shots.edit", body: shotUpdateSchema, what: "shot" }, async ({ shot, body }) => {
   const patch = body;

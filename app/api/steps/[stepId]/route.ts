@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { stepUpdateSchema } from "@/lib/schemas/build";
 import { deleteStep, updateStep } from "@/db/queries/build";
-import { assertStepPatchAllowed, checkLinks } from "@/lib/server/plan";
-import { AppError } from "@/lib/server/errors";
+import { assertStepPatchAllowed, checkLinks } from "@/lib/server/views/plan";
+import { AppError } from "@/lib/server/http/errors";
 import { recordAudit } from "@/db/queries/audit";
 
 export const PATCH = channelRoute({ load: "step", action: ["build.edit", "build.timing"], body: stepUpdateSchema, what: "build step" }, async ({ step, channelId, access, user, body }) => {

@@ -1,10 +1,10 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { toolUpdateSchema } from "@/lib/schemas/build";
 import { archiveTool, sponsorBelongsToChannel, updateTool } from "@/db/queries/tools";
-import { toolDto } from "@/lib/server/plan";
-import { AppError } from "@/lib/server/errors";
-import { claimUpload } from "@/lib/server/uploads";
+import { toolDto } from "@/lib/server/views/plan";
+import { AppError } from "@/lib/server/http/errors";
+import { claimUpload } from "@/lib/server/services/uploads";
 
 export const PATCH = channelRoute({ load: "tool", action: "tools.edit", body: toolUpdateSchema, what: "tool" }, async ({ tool, body }) => {
   const patch = body;

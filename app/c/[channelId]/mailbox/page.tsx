@@ -1,5 +1,5 @@
 import { format } from "date-fns";
-import { pageAccess } from "@/lib/server/page-access";
+import { pageAccess } from "@/lib/server/access/page-access";
 import { listMailMessagesForChannel } from "@/db/queries/mail";
 import { env } from "@/lib/env";
 import { Notice } from "@/components/ui/field";

@@ -1,4 +1,4 @@
-import { pageAccess } from "@/lib/server/page-access";
+import { pageAccess } from "@/lib/server/access/page-access";
 import { listMembersByChannel } from "@/db/queries/channels";
 import { listInvitationsByChannel } from "@/db/queries/auth";
 import { can } from "@/lib/permissions";

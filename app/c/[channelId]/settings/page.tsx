@@ -1,4 +1,4 @@
-import { pageAccess } from "@/lib/server/page-access";
+import { pageAccess } from "@/lib/server/access/page-access";
 import { getChannelById } from "@/db/queries/channels";
 import { can } from "@/lib/permissions";
 import { ChannelSettings } from "@/components/channel-settings";

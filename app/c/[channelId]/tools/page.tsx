@@ -1,7 +1,7 @@
-import { pageAccess } from "@/lib/server/page-access";
+import { pageAccess } from "@/lib/server/access/page-access";
 import { listToolsByChannel } from "@/db/queries/tools";
 import { listSponsorsByChannel } from "@/db/queries/sponsors";
-import { toolDto } from "@/lib/server/plan";
+import { toolDto } from "@/lib/server/views/plan";
 import { can } from "@/lib/permissions";
 import { ToolShelf } from "@/components/tools/tool-shelf";
 import { presignGet } from "@/storage/presign";

@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { episodeCreateSchema, episodeListQuerySchema } from "@/lib/schemas/episode";
 import { createEpisode, listEpisodesByChannel, toEpisodeDto } from "@/db/queries/episodes";
 import { recordAudit } from "@/db/queries/audit";
-import { boardFigures } from "@/lib/server/board-figures";
+import { boardFigures } from "@/lib/server/views/board-figures";
 
 export const GET = channelRoute({ load: "channel", action: "channel.read", query: episodeListQuerySchema }, async ({ channelId, query }) => {
   const rows = await listEpisodesByChannel({ channelId, stage: query.stage, month: query.month, archived: query.archived === "true" });

@@ -1,12 +1,12 @@
-import { channelRoute } from "@/lib/server/route-builder";
+import { channelRoute } from "@/lib/server/http/route-builder";
 import { addDays } from "date-fns";
-import { json } from "@/lib/server/api";
+import { json } from "@/lib/server/http/api";
 import { invitationCreateSchema } from "@/lib/schemas/account";
 import { createInvitation, listInvitationsByChannel } from "@/db/queries/auth";
 import { getChannelById } from "@/db/queries/channels";
 import { recordAudit } from "@/db/queries/audit";
-import { newToken } from "@/lib/server/tokens";
-import { appUrl, sendMail } from "@/lib/server/mail";
+import { newToken } from "@/lib/server/infra/tokens";
+import { appUrl, sendMail } from "@/lib/server/infra/mail";
 import { ROLE_LABELS } from "@/lib/roles";
 
 export const GET = channelRoute({ load: "channel", action: "members.manage" }, async ({ channelId }) => {

@@ -1,5 +1,5 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { listMembersByChannel } from "@/db/queries/channels";
 
 export const GET = channelRoute({ load: "channel", action: "channel.read" }, async ({ channelId }) => {

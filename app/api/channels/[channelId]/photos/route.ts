@@ -1,7 +1,7 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { photoUploadSchema } from "@/lib/schemas/build";
-import { issuePhotoUpload } from "@/lib/server/uploads";
+import { issuePhotoUpload } from "@/lib/server/services/uploads";
 
 /** Signs a direct upload of a tool photo for the channel's shelf. */
 export const POST = channelRoute({ load: "channel", action: "tools.edit", body: photoUploadSchema, what: "photo" }, async ({ channelId, user, body }) => {

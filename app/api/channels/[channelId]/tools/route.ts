@@ -1,10 +1,10 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { toolCreateSchema } from "@/lib/schemas/build";
 import { createTool, listToolsByChannel, sponsorBelongsToChannel } from "@/db/queries/tools";
-import { toolDto } from "@/lib/server/plan";
-import { AppError } from "@/lib/server/errors";
-import { claimUpload } from "@/lib/server/uploads";
+import { toolDto } from "@/lib/server/views/plan";
+import { AppError } from "@/lib/server/http/errors";
+import { claimUpload } from "@/lib/server/services/uploads";
 
 export const GET = channelRoute({ load: "channel", action: "channel.read" }, async ({ channelId }) => {
   return json({ tools: (await listToolsByChannel({ channelId })).map(toolDto) });

@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { completeUpload, listParts, objectSize } from "@/storage/multipart";
 import { readMediaMeta } from "@/storage/media-info";
 import { finishClip, toClipDto } from "@/db/queries/footage";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /**
  * Finishes an upload. The server lists the stored parts itself and checks

@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { partsRequestSchema } from "@/lib/schemas/footage";
 import { listParts, presignParts } from "@/storage/multipart";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 function uploading(clip: { state: string; uploadId: string | null; partSize: number | null }) {
   if (clip.state !== "uploading" || !clip.uploadId || !clip.partSize) throw new AppError("conflict:clip.stored", "This clip has finished uploading.");

@@ -1,11 +1,11 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { coverageRangeSchema } from "@/lib/schemas/footage";
 import { createRange } from "@/db/queries/coverage";
 import { getClipById } from "@/db/queries/footage";
 import { msToFrames, rateOf } from "@/lib/timecode";
-import { settleGaps } from "@/lib/server/coverage-loader";
-import { AppError } from "@/lib/server/errors";
+import { settleGaps } from "@/lib/server/services/coverage";
+import { AppError } from "@/lib/server/http/errors";
 
 /**
  * Lays B-roll on the script timeline: a clip placed at a frame (its in/out

@@ -1,6 +1,6 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
-import { coverageFor } from "@/lib/server/coverage-loader";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
+import { coverageFor } from "@/lib/server/services/coverage";
 
 /** The script timeline with B-roll ranges, computed and marked gaps, and voice-over coverage. */
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {

@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { gapCreateSchema } from "@/lib/schemas/footage";
 import { createGap } from "@/db/queries/coverage";
 import { linksBelong } from "@/db/queries/shots";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /** Marks a gap by hand, or keeps a computed one so it can be dismissed or resolved. */
 export const POST = channelRoute({ load: "episode", action: "coverage.manage", body: gapCreateSchema, what: "gap" }, async ({ episode, body }) => {

@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { materialCreateSchema } from "@/lib/schemas/build";
 import { createMaterials, listMaterialsByEpisode, stepIdsOfEpisode } from "@/db/queries/materials";
-import { materialsView } from "@/lib/server/materials-view";
-import { AppError } from "@/lib/server/errors";
+import { materialsView } from "@/lib/server/views/materials";
+import { AppError } from "@/lib/server/http/errors";
 
 /** The cut list with board feet, volume, sheets and cost per row, by material and in total. */
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {

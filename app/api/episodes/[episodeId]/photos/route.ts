@@ -1,7 +1,7 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { photoUploadSchema } from "@/lib/schemas/build";
-import { issuePhotoUpload } from "@/lib/server/uploads";
+import { issuePhotoUpload } from "@/lib/server/services/uploads";
 
 /** Signs a direct upload of one failure photo; the server never carries the bytes. */
 export const POST = channelRoute({ load: "episode", action: "build.edit", body: photoUploadSchema, what: "photo" }, async ({ episode, user, body }) => {

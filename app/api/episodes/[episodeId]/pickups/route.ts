@@ -1,11 +1,11 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
-import { assertCan } from "@/lib/server/access";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
+import { assertCan } from "@/lib/server/access/access";
 import { pickupCreateSchema as schema } from "@/lib/schemas/footage";
 import { createPickup, linksBelong, toShotDto } from "@/db/queries/shots";
 import { getGapById } from "@/db/queries/coverage";
 import { formatTimecode, rateOf } from "@/lib/timecode";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /** Turns a gap into a pickup shot on the shot list, linked back to the gap and its segment. */
 export const POST = channelRoute({ load: "episode", action: "coverage.manage", body: schema, what: "pickup" }, async ({ episode, access, body }) => {

@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { restoreEpisode, toEpisodeDto } from "@/db/queries/episodes";
 import { recordAudit } from "@/db/queries/audit";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /** Puts an archived episode back on the board, at the end of its stage. */
 export const POST = channelRoute({ load: "episode", action: "episode.archive" }, async ({ episode, user }) => {

@@ -1,10 +1,10 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { segmentCreateSchema } from "@/lib/schemas/script";
 import { createSegment, toSegmentDto } from "@/db/queries/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
-import { scriptViewFor } from "@/lib/server/script-view";
-import { AppError } from "@/lib/server/errors";
+import { scriptViewFor } from "@/lib/server/views/script";
+import { AppError } from "@/lib/server/http/errors";
 
 /** The script: segments with timing at the episode's rate, totals and chapters. */
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {

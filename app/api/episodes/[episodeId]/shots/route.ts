@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { shotCreateSchema } from "@/lib/schemas/footage";
 import { createShots, linksBelong, listShotsByEpisode, toShotDto } from "@/db/queries/shots";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
   return json({ shots: (await listShotsByEpisode({ episodeId: episode.id })).map(toShotDto) });

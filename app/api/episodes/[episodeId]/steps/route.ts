@@ -1,11 +1,11 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { stepCreateSchema } from "@/lib/schemas/build";
 import { createStep, listStepsByEpisode } from "@/db/queries/build";
 import { listToolsByChannel } from "@/db/queries/tools";
 import { listMembersByChannel } from "@/db/queries/channels";
-import { checkLinks, planView } from "@/lib/server/plan";
-import { AppError } from "@/lib/server/errors";
+import { checkLinks, planView } from "@/lib/server/views/plan";
+import { AppError } from "@/lib/server/http/errors";
 import { recordAudit } from "@/db/queries/audit";
 
 /** The build plan: steps with links, cautions and timing, plus every tool it uses. */

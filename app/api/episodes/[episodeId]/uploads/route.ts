@@ -1,11 +1,11 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { uploadCreateSchema } from "@/lib/schemas/footage";
 import { env } from "@/lib/env";
 import { newObjectKey } from "@/storage/keys";
 import { createUpload, planParts } from "@/storage/multipart";
 import { createClip, shotInEpisode, toClipDto } from "@/db/queries/footage";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /**
  * Starts a multipart upload: checks type and size before any byte moves,

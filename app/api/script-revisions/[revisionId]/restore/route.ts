@@ -1,7 +1,7 @@
-import { json } from "@/lib/server/api";
-import { channelRoute } from "@/lib/server/route-builder";
+import { json } from "@/lib/server/http/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
 import { restoreRevision, toSegmentDto } from "@/db/queries/script";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /** Puts the segment back as it was at this revision (a new version; history is kept). */
 export const POST = channelRoute({ load: "revision", action: "script.write" }, async ({ revision, user }) => {

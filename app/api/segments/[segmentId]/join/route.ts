@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { segmentJoinSchema } from "@/lib/schemas/script";
 import { joinWithNext, toSegmentDto } from "@/db/queries/script";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /** Joins the next segment onto this one; both versions must be the ones the writer saw. */
 export const POST = channelRoute({ load: "segment", action: "script.write", body: segmentJoinSchema, what: "join" }, async ({ segment, user, body }) => {

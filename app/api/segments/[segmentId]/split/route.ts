@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { segmentSplitSchema } from "@/lib/schemas/script";
 import { splitSegment, toSegmentDto } from "@/db/queries/script";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /** Splits a segment in two at the writer's cursor: this one keeps `before`, a new one after it gets `after`. */
 export const POST = channelRoute({ load: "segment", action: "script.write", body: segmentSplitSchema, what: "split" }, async ({ segment, user, body }) => {

@@ -1,10 +1,10 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { stepFailureSchema } from "@/lib/schemas/build";
 import { updateStep } from "@/db/queries/build";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 import { recordAudit } from "@/db/queries/audit";
-import { claimUpload } from "@/lib/server/uploads";
+import { claimUpload } from "@/lib/server/services/uploads";
 
 /** Marks a step failed with what went wrong (and an optional photo already uploaded). */
 export const POST = channelRoute({ load: "step", action: "build.edit", body: stepFailureSchema, what: "failure" }, async ({ step, channelId, user, body }) => {

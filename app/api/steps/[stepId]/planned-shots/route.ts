@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { createShots, listShotsByEpisode, toShotDto } from "@/db/queries/shots";
 import { COVERAGE_LABELS, type CoverageKind } from "@/lib/shot-kinds";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 import type { ShotKind } from "@/lib/schemas/footage";
 
 /** Creates one planned shot per coverage kind the build step asks for (skipping kinds it already has). */

@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { stepCreateSchema } from "@/lib/schemas/build";
 import { createStep } from "@/db/queries/build";
-import { checkLinks } from "@/lib/server/plan";
-import { AppError } from "@/lib/server/errors";
+import { checkLinks } from "@/lib/server/views/plan";
+import { AppError } from "@/lib/server/http/errors";
 import { recordAudit } from "@/db/queries/audit";
 
 /** Adds a remedy step right after the failed one; the failed step stays in the plan's history. */

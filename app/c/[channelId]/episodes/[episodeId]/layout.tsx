@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { format } from "date-fns";
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { STAGE_INFO } from "@/lib/stages";
 import { EpisodeNav } from "@/components/episode-nav";
 

@@ -1,4 +1,4 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { toEpisodeDto } from "@/db/queries/episodes";
 import { EpisodeEditor } from "@/components/episode-editor";
 import { can } from "@/lib/permissions";

@@ -1,6 +1,6 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json, parseId } from "@/lib/server/api";
-import { AppError } from "@/lib/server/errors";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json, parseId } from "@/lib/server/http/api";
+import { AppError } from "@/lib/server/http/errors";
 import { revokeInvitation } from "@/db/queries/auth";
 
 export const DELETE = channelRoute({ load: "channel", action: "members.manage" }, async ({ channelId, params }) => {

@@ -1,9 +1,9 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { materialCreateSchema, type MaterialCreate } from "@/lib/schemas/build";
 import { createMaterials, listMaterialsByEpisode, stepIdsOfEpisode, toMaterialInput } from "@/db/queries/materials";
 import { parseCsv, recordToBody, toCsv } from "@/lib/cut-list-csv";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 import { fileSlug } from "@/lib/file-name";
 
 const MAX_CSV_BYTES = 2 * 1024 * 1024;

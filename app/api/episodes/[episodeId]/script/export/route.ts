@@ -1,7 +1,7 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { parseQuery } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { parseQuery } from "@/lib/server/http/api";
 import { exportQuerySchema } from "@/lib/schemas/script";
-import { scriptViewFor } from "@/lib/server/script-view";
+import { scriptViewFor } from "@/lib/server/views/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { SEGMENT_KIND_LABELS } from "@/lib/script-timing";
 import { fileSlug } from "@/lib/file-name";

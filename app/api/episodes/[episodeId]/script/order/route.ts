@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { segmentOrderSchema } from "@/lib/schemas/script";
 import { reorderSegments } from "@/db/queries/script";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 export const PUT = channelRoute({ load: "episode", action: "script.write", body: segmentOrderSchema, what: "segment order" }, async ({ episode, body }) => {
   const { ids } = body;

@@ -1,5 +1,5 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { listRevisionsByEpisode } from "@/db/queries/script";
 
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {

@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { timingQuerySchema } from "@/lib/schemas/script";
-import { scriptViewFor } from "@/lib/server/script-view";
-import { AppError } from "@/lib/server/errors";
+import { scriptViewFor } from "@/lib/server/views/script";
+import { AppError } from "@/lib/server/http/errors";
 
 /** Computed timing at a chosen frame rate (?rate=25&dropFrame=false); the episode's rate by default. */
 export const GET = channelRoute({ load: "episode", action: "channel.read", query: timingQuerySchema }, async ({ episode, query }) => {

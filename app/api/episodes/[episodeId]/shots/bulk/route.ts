@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { shotBulkSchema } from "@/lib/schemas/footage";
 import { setShotStatus } from "@/db/queries/shots";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 /** One status for many shots, all or none. */
 export const POST = channelRoute({ load: "episode", action: "shots.edit", body: shotBulkSchema, what: "bulk status" }, async ({ episode, body }) => {

@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { channelRoute } from "@/lib/server/route-builder";
+import { channelRoute } from "@/lib/server/http/route-builder";
 import { CSV_EXPORT_OPTIONS } from "@/lib/cut-list-csv";
 import { listShotsByEpisode } from "@/db/queries/shots";
 import { stepIdsOfEpisode } from "@/db/queries/materials";

@@ -1,8 +1,8 @@
-import { channelRoute } from "@/lib/server/route-builder";
-import { json } from "@/lib/server/api";
+import { channelRoute } from "@/lib/server/http/route-builder";
+import { json } from "@/lib/server/http/api";
 import { stepOrderSchema } from "@/lib/schemas/build";
 import { reorderSteps } from "@/db/queries/build";
-import { AppError } from "@/lib/server/errors";
+import { AppError } from "@/lib/server/http/errors";
 
 export const PUT = channelRoute({ load: "episode", action: "build.edit", body: stepOrderSchema, what: "step order" }, async ({ episode, body }) => {
   const { ids } = body;

@@ -1,4 +1,4 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { listClipsByEpisode } from "@/db/queries/footage";
 import { can } from "@/lib/permissions";
 import { CoverageView } from "@/components/coverage/coverage-view";

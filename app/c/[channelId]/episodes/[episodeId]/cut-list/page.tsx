@@ -1,4 +1,4 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { getChannelById } from "@/db/queries/channels";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { can } from "@/lib/permissions";

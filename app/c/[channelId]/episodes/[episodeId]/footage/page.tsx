@@ -1,4 +1,4 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { listShotsByEpisode } from "@/db/queries/shots";
 import { can } from "@/lib/permissions";
 import { FootagePanel } from "@/components/footage/footage-panel";

@@ -1,6 +1,6 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { listToolsByChannel } from "@/db/queries/tools";
-import { toolDto } from "@/lib/server/plan";
+import { toolDto } from "@/lib/server/views/plan";
 import { can } from "@/lib/permissions";
 import { BuildPlan } from "@/components/plan/build-plan";
 

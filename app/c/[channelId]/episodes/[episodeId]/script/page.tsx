@@ -1,4 +1,4 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { listMembersByChannel } from "@/db/queries/channels";
 import { getUserById } from "@/db/queries/users";

@@ -1,4 +1,4 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { listStepsByEpisode } from "@/db/queries/build";
 import { can } from "@/lib/permissions";
 import { ShotList } from "@/components/shots/shot-list";

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { getClipById } from "@/db/queries/footage";
 import { presignGet } from "@/storage/presign";
 import { rateOf } from "@/lib/timecode";

@@ -1,5 +1,5 @@
-import { episodePage } from "@/lib/server/episode-page";
-import { scriptViewFor } from "@/lib/server/script-view";
+import { episodePage } from "@/lib/server/access/episode-page";
+import { scriptViewFor } from "@/lib/server/views/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { ReadThrough } from "@/components/script/read-through";
 

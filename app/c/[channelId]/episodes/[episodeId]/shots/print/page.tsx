@@ -1,4 +1,4 @@
-import { episodePage } from "@/lib/server/episode-page";
+import { episodePage } from "@/lib/server/access/episode-page";
 import { listStepsByEpisode } from "@/db/queries/build";
 import { listShotsByEpisode } from "@/db/queries/shots";
 import { SHOT_KIND_LABELS, SHOT_STATUS_LABELS } from "@/lib/schemas/footage";

@@ -1,9 +1,9 @@
 import "server-only";
 import { cache } from "react";
 import { decode } from "next-auth/jwt";
-import { env } from "../env";
-import { AppError } from "./errors";
-import { getUserById } from "../../db/queries/users";
+import { env } from "../../env";
+import { AppError } from "../http/errors";
+import { getUserById } from "../../../db/queries/users";
 
 const COOKIE_NAMES = ["__Secure-next-auth.session-token", "next-auth.session-token"];
 

@@ -1,14 +1,14 @@
 import "server-only";
 /** Shared checks and views for build-plan routes. */
-import { crewTiming, findCycle, planTiming } from "../build-plan";
-import { stepHazards } from "../safety";
-import { isSponsoredAcquisition, TIMING_FIELDS, type StepUpdate } from "../schemas/build";
-import type { ChannelAccess } from "./access";
-import { assertCan } from "./access";
-import { AppError } from "./errors";
-import type { PlanContext, StepWithLinks } from "../../db/queries/build";
-import type { Tool } from "../../db/schema";
-import { presignGet } from "../../storage/presign";
+import { crewTiming, findCycle, planTiming } from "../../build-plan";
+import { stepHazards } from "../../safety";
+import { isSponsoredAcquisition, TIMING_FIELDS, type StepUpdate } from "../../schemas/build";
+import type { ChannelAccess } from "../access/access";
+import { assertCan } from "../access/access";
+import { AppError } from "../http/errors";
+import type { PlanContext, StepWithLinks } from "../../../db/queries/build";
+import type { Tool } from "../../../db/schema";
+import { presignGet } from "../../../storage/presign";
 
 export function checkLinks(ctx: PlanContext, stepId: string | null, dependsOn?: string[], toolIds?: string[]) {
   const fields: Record<string, string[]> = {};

@@ -1,7 +1,7 @@
 import "server-only";
-import { rowFigures, totalsByMaterial } from "../materials";
-import { toMaterialInput } from "../../db/queries/materials";
-import type { MaterialRow } from "../../db/schema";
+import { rowFigures, totalsByMaterial } from "../../materials";
+import { toMaterialInput } from "../../../db/queries/materials";
+import type { MaterialRow } from "../../../db/schema";
 
 export function materialsView(rows: MaterialRow[]) {
   const inputs = rows.map(toMaterialInput);

@@ -1,6 +1,6 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
-import { env } from "../env";
+import { env } from "../../env";
 
 const g = globalThis as unknown as { __jigboardMail?: Transporter };
 

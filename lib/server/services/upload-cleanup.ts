@@ -1,8 +1,8 @@
 import "server-only";
 import { subDays } from "date-fns";
-import { abortUpload } from "../../storage/multipart";
-import { abortStaleUploads } from "../../storage/cleanup";
-import { deleteClipRow, listStaleUploadingClips } from "../../db/queries/footage";
+import { abortUpload } from "../../../storage/multipart";
+import { abortStaleUploads } from "../../../storage/cleanup";
+import { deleteClipRow, listStaleUploadingClips } from "../../../db/queries/footage";
 
 /**
  * Aborts multipart uploads older than a day under a channel's prefix (or all

@@ -1,10 +1,10 @@
 import "server-only";
-import { computeCoverage, type ComputedGap, type GapView } from "../coverage";
+import { computeCoverage, type ComputedGap, type GapView } from "../../coverage";
 
 export type { GapView };
-import { formatTimecode, msToFrames, rateOf } from "../timecode";
-import type { Channel, CoverageRange, Episode, Gap } from "../../db/schema";
-import type { scriptView } from "./script-view";
+import { formatTimecode, msToFrames, rateOf } from "../../timecode";
+import type { Channel, CoverageRange, Episode, Gap } from "../../../db/schema";
+import type { scriptView } from "./script";
 
 
 export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs" | "toCameraMaxMs">, view: ReturnType<typeof scriptView>, ranges: CoverageRange[], stored: Gap[], pickups: Map<string, string> = new Map()) {

@@ -1,7 +1,7 @@
 import "server-only";
-import { env } from "../env";
-import { AppError } from "./errors";
-import { countRecentFailures, recordSignInAttempt } from "../../db/queries/auth";
+import { env } from "../../env";
+import { AppError } from "../http/errors";
+import { countRecentFailures, recordSignInAttempt } from "../../../db/queries/auth";
 
 /**
  * Throttles kept in PostgreSQL so they hold across app instances.
@@ -18,7 +18,7 @@ export function signInKeys(email: string, address: string): { pair: string; acco
 }
 
 /**
- * The client's address. The serving process (lib/server/serve.mjs) drops any
+ * The client's address. The serving process (lib/server/http/serve.mjs) drops any
  * X-Forwarded-For a client sent unless TRUST_PROXY is set, and Next then fills
  * it from the socket; with a trusted proxy, the rightmost entry is the one it added.
  */

@@ -2,11 +2,11 @@ import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import bcrypt from "bcryptjs";
-import { env } from "../env";
-import { signInSchema } from "../schemas/account";
-import { getUserByEmail } from "../../db/queries/users";
+import { env } from "../../env";
+import { signInSchema } from "../../schemas/account";
+import { getUserByEmail } from "../../../db/queries/users";
 import { clientAddress, recordSignIn, signInKeys } from "./rate-limit";
-import { safeCallbackPath } from "../safe-redirect";
+import { safeCallbackPath } from "../../safe-redirect";
 
 // Compared against when the e-mail is unknown, so timing does not reveal which accounts exist.
 const DUMMY_HASH = "$2b$10$ZQI5kAzYXXBOnH/TZkbJTOKXHQ58DY.9hJEcqZHMoaq/kRLgnVHjq";

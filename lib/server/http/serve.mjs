@@ -6,7 +6,7 @@
  * headers (CSP with a per-request nonce, framing, sniffing, referrer,
  * permissions, opener) go on every response.
  *
- *   node lib/server/serve.mjs <host> <port> [--dev]
+ *   node lib/server/http/serve.mjs <host> <port> [--dev]
  */
 import http from "node:http";
 import next from "next";

@@ -3,7 +3,7 @@ import { cache } from "react";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { pageAccess } from "./page-access";
-import { getEpisodeById } from "../../db/queries/episodes";
+import { getEpisodeById } from "../../../db/queries/episodes";
 
 // The episode layout and its page read the same episode: once per render (React cache).
 const episodeOf = cache((id: string) => getEpisodeById({ id }));

@@ -1,11 +1,11 @@
 import "server-only";
-import { timeScript, DEFAULT_WPM } from "../script-timing";
-import { buildChapters } from "../chapters";
-import { convertFrames, formatTimecode, framesToSeconds, rateOf } from "../timecode";
-import type { FrameRateId } from "../frame-rate";
-import type { Episode } from "../../db/schema";
-import { listSegmentsByEpisode, toSegmentDto, type Segment } from "../../db/queries/script";
-import { getUserById } from "../../db/queries/users";
+import { timeScript, DEFAULT_WPM } from "../../script-timing";
+import { buildChapters } from "../../chapters";
+import { convertFrames, formatTimecode, framesToSeconds, rateOf } from "../../timecode";
+import type { FrameRateId } from "../../frame-rate";
+import type { Episode } from "../../../db/schema";
+import { listSegmentsByEpisode, toSegmentDto, type Segment } from "../../../db/queries/script";
+import { getUserById } from "../../../db/queries/users";
 
 export async function presenterWpm(episode: Episode): Promise<number> {
   if (!episode.presenterId) return DEFAULT_WPM;

@@ -1,10 +1,10 @@
 import "server-only";
-import { coverageOf } from "./coverage-view";
-import { scriptViewFor } from "./script-view";
-import type { Episode } from "../../db/schema";
-import { getChannelById } from "../../db/queries/channels";
-import { listGapsByEpisode, listRangesByEpisode, resolveClosedGaps } from "../../db/queries/coverage";
-import { listShotsByEpisode } from "../../db/queries/shots";
+import { coverageOf } from "../views/coverage";
+import { scriptViewFor } from "../views/script";
+import type { Episode } from "../../../db/schema";
+import { getChannelById } from "../../../db/queries/channels";
+import { listGapsByEpisode, listRangesByEpisode, resolveClosedGaps } from "../../../db/queries/coverage";
+import { listShotsByEpisode } from "../../../db/queries/shots";
 
 export async function coverageFor(episode: Episode) {
   const [view, channel, ranges, stored, shots] = await Promise.all([

@@ -1,17 +1,17 @@
 /**
  * `npm start`: local services → migrations → demo seed (once) → build if
- * needed → the app (lib/server/serve.mjs) on 127.0.0.1. Ctrl-C or SIGTERM stops everything
+ * needed → the app (lib/server/http/serve.mjs) on 127.0.0.1. Ctrl-C or SIGTERM stops everything
  * this process started; a second start reuses the data in .data/.
  */
 import { spawn, spawnSync } from "node:child_process";
 import path from "node:path";
 import { drizzle } from "drizzle-orm/node-postgres";
 import pg from "pg";
-import { authSecret, demoPutObject, startLocalServices } from "./local-services";
+import { authSecret, demoPutObject, startLocalServices } from "./services";
 import { buildIsStale } from "./build-check";
-import { LOCAL_PORTS } from "../env";
-import { seedDemo } from "../../db/seed";
-import * as schema from "../../db/schema";
+import { LOCAL_PORTS } from "../../env";
+import { seedDemo } from "../../../db/seed";
+import * as schema from "../../../db/schema";
 
 const root = process.cwd();
 const dataRoot = path.join(root, ".data");
@@ -50,7 +50,7 @@ async function main() {
   // Abandoned footage uploads (started more than a day ago) are aborted at every start.
   Object.assign(process.env, services.env, { NEXTAUTH_SECRET: authSecret(dataRoot) });
   try {
-    const { abortStaleUploads } = await import("../../storage/cleanup");
+    const { abortStaleUploads } = await import("../../../storage/cleanup");
     const aborted = await abortStaleUploads("channel/", new Date(Date.now() - 24 * 3600 * 1000));
     const pool = new pg.Pool({ connectionString: services.env.DATABASE_URL });
     const removed = await pool.query("delete from clips where state = 'uploading' and created_at < now() - interval '1 day'");
@@ -75,7 +75,7 @@ async function main() {
     if (b.status !== 0) return shutdown(b.status ?? 1);
   }
 
-  const child = spawn(process.execPath, [path.join(root, "lib", "server", "serve.mjs"), "127.0.0.1", String(port), ...(dev ? ["--dev"] : [])], {
+  const child = spawn(process.execPath, [path.join(root, "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(port), ...(dev ? ["--dev"] : [])], {
     stdio: "inherit",
     env: childEnv,
     detached: true,

@@ -4,11 +4,11 @@ import "server-only";
  * every request and asks lib/permissions. A channel the user is not a member
  * of is "not found", never "forbidden", so its existence does not leak.
  */
-import { can, canMoveEpisode, type Action } from "../permissions";
-import type { Role } from "../roles";
-import type { Stage } from "../stages";
-import { AppError } from "./errors";
-import { getMembership } from "../../db/queries/channels";
+import { can, canMoveEpisode, type Action } from "../../permissions";
+import type { Role } from "../../roles";
+import type { Stage } from "../../stages";
+import { AppError } from "../http/errors";
+import { getMembership } from "../../../db/queries/channels";
 
 export interface ChannelAccess {
   channelId: string;

@@ -6,10 +6,10 @@
 import path from "node:path";
 import fs from "node:fs";
 import crypto from "node:crypto";
-import { startLocalPostgres } from "../../db/local-postgres";
-import { startLocalS3 } from "../../storage/local-s3";
-import { startLocalSmtp } from "./local-smtp";
-import { runMigrations } from "../../db/migrate";
+import { startLocalPostgres } from "./postgres";
+import { startLocalS3 } from "../../../storage/local/s3";
+import { startLocalSmtp } from "./smtp";
+import { runMigrations } from "../../../db/migrate";
 
 export interface ServicePorts {
   postgres: number;

@@ -1,11 +1,11 @@
 import "server-only";
 import { HeadObjectCommand } from "@aws-sdk/client-s3";
-import { AppError } from "./errors";
-import { newObjectKey } from "../../storage/keys";
-import { presignPut } from "../../storage/presign";
-import { bucket, s3 } from "../../storage/s3";
-import { createPendingUpload, getPendingUploadByKey, markPendingUploadUsed } from "../../db/queries/uploads";
-import type { PendingUpload } from "../../db/schema";
+import { AppError } from "../http/errors";
+import { newObjectKey } from "../../../storage/keys";
+import { presignPut } from "../../../storage/presign";
+import { bucket, s3 } from "../../../storage/s3";
+import { createPendingUpload, getPendingUploadByKey, markPendingUploadUsed } from "../../../db/queries/uploads";
+import type { PendingUpload } from "../../../db/schema";
 
 type Purpose = PendingUpload["purpose"];
 

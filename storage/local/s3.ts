@@ -7,8 +7,8 @@ import path from "node:path";
 // s3rver ships no types.
 // @ts-expect-error untyped package
 import S3rver from "s3rver";
-import { multipartExtension } from "./local-s3-multipart";
-import { presignedSignatureCheck } from "./local-s3-presigned";
+import { multipartExtension } from "./s3-multipart";
+import { presignedSignatureCheck } from "./s3-presigned";
 
 const CORS = `<CORSConfiguration>
   <CORSRule>

@@ -1,13 +1,13 @@
 import "server-only";
-import { scriptView } from "./script-view";
-import { DEFAULT_WPM } from "../script-timing";
-import { coverageOf } from "./coverage-view";
-import type { Episode } from "../../db/schema";
-import { listSegmentsByEpisodes } from "../../db/queries/script";
-import { listGapsByEpisodes, listRangesByEpisodes } from "../../db/queries/coverage";
-import { getChannelById } from "../../db/queries/channels";
-import { countShotsByEpisodes } from "../../db/queries/shots";
-import { listReadingRatesByUserIds } from "../../db/queries/users";
+import { scriptView } from "./script";
+import { DEFAULT_WPM } from "../../script-timing";
+import { coverageOf } from "./coverage";
+import type { Episode } from "../../../db/schema";
+import { listSegmentsByEpisodes } from "../../../db/queries/script";
+import { listGapsByEpisodes, listRangesByEpisodes } from "../../../db/queries/coverage";
+import { getChannelById } from "../../../db/queries/channels";
+import { countShotsByEpisodes } from "../../../db/queries/shots";
+import { listReadingRatesByUserIds } from "../../../db/queries/users";
 
 export interface BoardFigures {
   scriptSeconds: number | null;

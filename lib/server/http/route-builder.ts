@@ -12,16 +12,14 @@ import "server-only";
  * every route with its action and generate the route × role matrix.
  */
 import type { z } from "zod";
-import { can, type Action } from "../permissions";
-import { assertCan, requireChannel, type ChannelAccess } from "./access";
+import { can, type Action } from "../../permissions";
+import { assertCan, requireChannel, type ChannelAccess } from "../access/access";
 import { assertContentType, parseBody, parseId, parseQuery, route, sessionUser } from "./api";
 import { AppError } from "./errors";
-import type { SessionUser } from "./session";
-import { loadEpisode, loadMaterial, loadStep, loadTool } from "./loaders";
-import { loadSegment } from "./segment-loader";
-import { loadClip, loadShot } from "./clip-loader";
-import { getGapById, getRangeById } from "../../db/queries/coverage";
-import { getRevisionById } from "../../db/queries/script";
+import type { SessionUser } from "../access/session";
+import { loadClip, loadEpisode, loadMaterial, loadSegment, loadShot, loadStep, loadTool } from "../access/loaders";
+import { getGapById, getRangeById } from "../../../db/queries/coverage";
+import { getRevisionById } from "../../../db/queries/script";
 
 async function channelOf(userId: string, rawId: string | undefined) {
   const channelId = parseId(rawId, "channel");

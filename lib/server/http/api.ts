@@ -1,8 +1,8 @@
 import "server-only";
 import { z } from "zod";
 import { AppError, toResponse, validationError } from "./errors";
-import { requireUser, type SessionUser } from "./session";
-import { env } from "../env";
+import { requireUser, type SessionUser } from "../access/session";
+import { env } from "../../env";
 
 /** The path of the first string (or key) holding a NUL, which PostgreSQL cannot store in text. */
 export function findNul(value: unknown, path: string[] = []): string | null {

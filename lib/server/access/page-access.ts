@@ -3,9 +3,9 @@ import { cache } from "react";
 import { notFound, redirect } from "next/navigation";
 import { z } from "zod";
 import { currentUser, type SessionUser } from "./session";
-import { getMembership } from "../../db/queries/channels";
-import { can, type Action } from "../permissions";
-import type { Role } from "../roles";
+import { getMembership } from "../../../db/queries/channels";
+import { can, type Action } from "../../permissions";
+import type { Role } from "../../roles";
 
 // One lookup per render, however many layouts and pages ask (React cache).
 const membershipOf = cache((userId: string, channelId: string) => getMembership({ userId, channelId }));
