@@ -26,4 +26,25 @@ export default tseslint.config(
       "no-restricted-imports": ["error", { patterns: ["**/db/**", "**/storage/**", "**/server/**", "pg", "next/*"] }],
     },
   },
+  {
+    // The database layer reads and writes rows: it takes types from lib, never code.
+    files: ["db/**/*.ts"],
+    rules: {
+      "@typescript-eslint/no-restricted-imports": ["error", { patterns: [{ group: ["**/lib/**", "@/lib/**"], allowTypeImports: true, message: "db/ may import only types from lib/; put rules in lib/server/services." }] }],
+    },
+  },
+  {
+    // Browser code reaches the server only through the JSON API.
+    files: ["components/**/*.ts", "components/**/*.tsx"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [{ group: ["@/db/**", "**/db/**", "@/storage/**", "**/storage/**", "@/lib/server/**", "**/lib/server/**"], message: "components run in the browser: call the API instead." }] }],
+    },
+  },
+  {
+    // Routes reach storage through storage/, never the SDK.
+    files: ["app/**/*.ts", "app/**/*.tsx", "lib/server/services/**/*.ts", "lib/server/views/**/*.ts", "lib/server/http/**/*.ts", "lib/server/access/**/*.ts"],
+    rules: {
+      "no-restricted-imports": ["error", { patterns: [{ group: ["@aws-sdk/*"], message: "use the storage/ modules" }] }],
+    },
+  },
 );

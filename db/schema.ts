@@ -33,6 +33,7 @@ import type { Acquisition, StepStatus } from "../lib/schemas/build";
 import type { PricingUnit } from "../lib/materials";
 import type { SegmentKind } from "../lib/script-timing";
 import type { ShotKind, ShotStatus } from "../lib/schemas/footage";
+import type { CoverageKind } from "../lib/shot-kinds";
 
 const id = () => uuid("id").primaryKey().defaultRandom();
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -48,6 +49,7 @@ export const users = pgTable(
     name: text("name").notNull(),
     passwordHash: text("password_hash").notNull(),
     /** Presenter's reading rate for script timing (words per minute). */
+    // The same number as DEFAULT_WPM in lib/script-timing.ts (db/ takes no values from lib/).
     readingRateWpm: integer("reading_rate_wpm").notNull().default(150),
     /** Bumped on a password change or "sign out everywhere": sessions signed with an older value end. */
     sessionVersion: integer("session_version").notNull().default(0),
@@ -187,7 +189,7 @@ export const buildSteps = pgTable(
     waitMinutes: integer("wait_minutes").notNull().default(0),
     waitReason: text("wait_reason").notNull().default(""),
     crewNeeded: integer("crew_needed").notNull().default(1),
-    coverageKinds: text("coverage_kinds").array().notNull().default(sql`'{}'::text[]`),
+    coverageKinds: text("coverage_kinds").array().$type<CoverageKind[]>().notNull().default(sql`'{}'::text[]`),
     /** Hazards flagged on the step itself (power_tool, finish, fire); tools add their own. */
     hazards: text("hazards").array().notNull().default(sql`'{}'::text[]`),
     /** planned | in_progress | done | failed | skipped */

@@ -14,6 +14,7 @@ import type { StepStatus } from "../lib/schemas/build";
 import type { PricingUnit } from "../lib/materials";
 import type { SegmentKind } from "../lib/script-timing";
 import type { ShotKind, ShotStatus } from "../lib/schemas/footage";
+import type { CoverageKind } from "../lib/shot-kinds";
 
 export const DEMO_PASSWORD = "jigboard-demo";
 
@@ -113,7 +114,7 @@ interface SeedStep {
   reason?: string;
   deps?: string[];
   tools?: string[];
-  cover?: string[];
+  cover?: CoverageKind[];
   hazards?: string[];
   status?: StepStatus;
   failure?: string;

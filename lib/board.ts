@@ -29,3 +29,10 @@ export function moveItem<T extends BoardItem>(items: T[], id: string, toStage: S
   cols[toStage] = target;
   return STAGES.flatMap((s) => cols[s].map((item, position) => ({ ...item, stage: s, position })));
 }
+
+/** Puts `id` into a column's ids at `index`, clamped to the column. */
+export function placeInColumn(ids: string[], id: string, index: number): string[] {
+  const rest = ids.filter((x) => x !== id);
+  const at = Math.max(0, Math.min(index, rest.length));
+  return [...rest.slice(0, at), id, ...rest.slice(at)];
+}

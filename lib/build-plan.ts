@@ -55,6 +55,35 @@ export function findCycle(steps: Pick<PlanStep, "id" | "dependsOn">[]): string[]
   return null;
 }
 
+/**
+ * Where a remedy for a failed step goes. It depends on the failed step (plus
+ * its own dependencies), sits right after the failed step and its earlier
+ * remedies, and every step that waited for the failed step now waits for the
+ * remedy too (unless that would make a loop), so the schedule follows the fix.
+ */
+export function placeRemedy(
+  steps: { id: string; dependsOn: string[]; remedyOfStepId: string | null }[],
+  failedId: string,
+  remedyId: string,
+  remedyDependsOn: string[],
+): { dependsOn: string[]; rewired: string[]; order: string[] } {
+  const dependsOn = remedyDependsOn.includes(failedId) ? remedyDependsOn : [failedId, ...remedyDependsOn];
+  let graph = [...steps.map((s) => ({ id: s.id, dependsOn: s.dependsOn })), { id: remedyId, dependsOn }];
+  const rewired: string[] = [];
+  for (const s of steps) {
+    if (s.id === failedId || s.remedyOfStepId === failedId || !s.dependsOn.includes(failedId)) continue;
+    const next = graph.map((g) => (g.id === s.id ? { ...g, dependsOn: [...g.dependsOn, remedyId] } : g));
+    if (findCycle(next)) continue;
+    graph = next;
+    rewired.push(s.id);
+  }
+  const order = steps.map((s) => s.id);
+  let at = order.indexOf(failedId) + 1;
+  while (at < order.length && steps[at]!.remedyOfStepId === failedId) at++;
+  order.splice(at, 0, remedyId);
+  return { dependsOn, rewired, order };
+}
+
 function duration(s: PlanStep) {
   return s.status === "skipped" ? { active: 0, wait: 0 } : { active: Math.max(0, s.activeMinutes), wait: Math.max(0, s.waitMinutes) };
 }

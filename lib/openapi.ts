@@ -8,11 +8,9 @@ import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
 import { channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, memberRolesSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
-import { materialCreateSchema, materialUpdateSchema, photoUploadSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolUpdateSchema, STEP_STATUSES } from "./schemas/build";
-import { HAZARDS } from "./safety";
-import { exportQuerySchema, readingRateSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSplitSchema, timingQuerySchema } from "./schemas/script";
-import { SEGMENT_KINDS } from "./script-timing";
-import { clipUpdateSchema, coverageRangeSchema, gapCreateSchema, gapUpdateSchema, partsRequestSchema, pickupCreateSchema, shotBulkSchema, shotCreateSchema, shotUpdateSchema, uploadCreateSchema, SHOT_KINDS, SHOT_STATUSES } from "./schemas/footage";
+import { cutListSchema, materialCreateSchema, materialSchema, materialUpdateSchema, photoUploadSchema, planSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolSchema, toolUpdateSchema } from "./schemas/build";
+import { chaptersSchema, exportQuerySchema, rateSchema, readingRateSchema, scriptSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSchema, segmentSplitSchema, segmentTimingSchema, timingQuerySchema, totalsSchema } from "./schemas/script";
+import { clipSchema, clipUpdateSchema, coverageRangeSchema, coverageSchema, gapCreateSchema, gapUpdateSchema, partsRequestSchema, pickupCreateSchema, shotBulkSchema, shotCreateSchema, shotSchema, shotUpdateSchema, uploadCreateSchema } from "./schemas/footage";
 
 type Method = "get" | "post" | "patch" | "put" | "delete";
 interface RouteDoc {
@@ -35,154 +33,7 @@ const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.s
 const invitationSchema = z.object({ id: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), expiresAt: z.string() });
 const mailSchema = z.object({ id: z.string(), fromAddress: z.string(), toAddresses: z.array(z.string()), subject: z.string(), textBody: z.string(), receivedAt: z.string() });
 
-const timingSchema = z.object({ start: z.number(), activeEnd: z.number(), end: z.number() });
-const toolSchema = z
-  .object({ id: z.string(), name: z.string(), kind: z.string(), acquisition: z.string(), sponsorId: z.string().nullable(), sponsored: z.boolean(), caution: z.string(), photoKey: z.string().nullable() })
-  .meta({ id: "Tool" });
-const planSchema = z
-  .object({
-    steps: z.array(
-      z.object({
-        id: z.string(),
-        position: z.number(),
-        title: z.string(),
-        notes: z.string(),
-        activeMinutes: z.number(),
-        waitMinutes: z.number(),
-        waitReason: z.string(),
-        crewNeeded: z.number(),
-        coverageKinds: z.array(z.string()),
-        hazards: z.array(z.string()),
-        cautions: z.array(z.enum(HAZARDS)),
-        dependsOn: z.array(z.string()),
-        toolIds: z.array(z.string()),
-        status: z.enum(STEP_STATUSES),
-        failureNote: z.string().nullable(),
-        failurePhotoUrl: z.string().nullable(),
-        remedyOfStepId: z.string().nullable(),
-        timing: timingSchema,
-      }),
-    ),
-    timing: z.object({ totalActiveMinutes: z.number(), totalWaitMinutes: z.number(), criticalPathMinutes: z.number(), criticalPath: z.array(z.string()) }),
-    toolsUsed: z.array(toolSchema.extend({ steps: z.array(z.string()) })),
-  })
-  .meta({ id: "BuildPlan" });
-const figuresSchema = z.object({ boardFeet: z.number(), cubicMetres: z.number(), sheets: z.number(), linearFeet: z.number(), costMinor: z.number() });
-const materialSchema = z
-  .object({
-    id: z.string(),
-    partName: z.string(),
-    material: z.string(),
-    unit: z.enum(["in", "mm"]),
-    thickness: z.number(),
-    width: z.number(),
-    length: z.number(),
-    quantity: z.number(),
-    sizing: z.enum(["nominal", "actual"]),
-    pricingUnit: z.string(),
-    unitPriceMinor: z.number(),
-    currency: z.string(),
-    wastePercent: z.number(),
-    stepId: z.string().nullable(),
-    supplierNote: z.string(),
-    figures: figuresSchema,
-  })
-  .meta({ id: "MaterialRow" });
-const materialTotalSchema = z.object({ material: z.string(), boardFeet: z.number(), cubicMetres: z.number(), sheetsToBuy: z.number(), costMinor: z.number(), rows: z.number() });
-const cutListSchema = z
-  .object({ rows: z.array(materialSchema), totals: z.object({ byMaterial: z.array(materialTotalSchema), total: materialTotalSchema.omit({ material: true }) }) })
-  .meta({ id: "CutList" });
-
-const segmentSchema = z
-  .object({
-    id: z.string(),
-    position: z.number(),
-    kind: z.enum(SEGMENT_KINDS),
-    text: z.string(),
-    stepId: z.string().nullable(),
-    pinnedStartFrame: z.number().nullable(),
-    explicitDurationFrames: z.number().nullable(),
-    editorNotes: z.string(),
-    chapterStart: z.boolean(),
-    chapterTitle: z.string().nullable(),
-    version: z.number(),
-    updatedBy: z.string().nullable(),
-    updatedAt: z.string(),
-  })
-  .meta({ id: "Segment" });
-const segmentTimingSchema = z.object({
-  start: z.number(),
-  end: z.number(),
-  duration: z.number(),
-  estimatedStart: z.number(),
-  drift: z.number().nullable(),
-  words: z.number(),
-  source: z.enum(["explicit", "reading", "caption"]),
-  startTimecode: z.string(),
-  endTimecode: z.string(),
-  durationSeconds: z.number(),
-});
-const chaptersSchema = z.object({
-  chapters: z.array(z.object({ segmentId: z.string(), title: z.string(), startSeconds: z.number(), line: z.string(), problems: z.array(z.string()) })),
-  problems: z.array(z.string()),
-  valid: z.boolean(),
-  text: z.string(),
-});
-const totalsSchema = z.object({
-  frames: z.number(),
-  timecode: z.string(),
-  seconds: z.number(),
-  targetFrames: z.number().nullable(),
-  overFrames: z.number().nullable(),
-  overSeconds: z.number().nullable(),
-  byKind: z.record(z.string(), z.number()),
-  byStep: z.record(z.string(), z.number()),
-});
-const rateSchema = z.object({ id: z.string(), dropFrame: z.boolean(), num: z.number(), den: z.number() });
-const scriptSchema = z
-  .object({ rate: rateSchema, wordsPerMinute: z.number(), segments: z.array(segmentSchema.extend({ timing: segmentTimingSchema })), totals: totalsSchema, chapters: chaptersSchema })
-  .meta({ id: "Script" });
 const conflictNote = "409 answers error.current with the stored segment";
-const shotSchema = z
-  .object({ id: z.string(), kind: z.enum(SHOT_KINDS), description: z.string(), framing: z.string(), cameraNotes: z.string(), priority: z.number(), status: z.enum(SHOT_STATUSES), stepId: z.string().nullable(), segmentId: z.string().nullable(), shootDayId: z.string().nullable(), gapId: z.string().nullable(), position: z.number() })
-  .meta({ id: "Shot" });
-const clipSchema = z
-  .object({
-    id: z.string(),
-    episodeId: z.string(),
-    shotId: z.string().nullable(),
-    state: z.enum(["uploading", "stored"]),
-    originalName: z.string(),
-    sizeBytes: z.number(),
-    partSize: z.number().nullable(),
-    contentType: z.string(),
-    durationMs: z.number().nullable(),
-    frameRate: z.string().nullable(),
-    width: z.number().nullable(),
-    height: z.number().nullable(),
-    startTimecode: z.string().nullable(),
-    checksum: z.string().nullable(),
-    inFrame: z.number().nullable(),
-    outFrame: z.number().nullable(),
-    createdAt: z.string(),
-  })
-  .meta({ id: "Clip" });
-const gapViewSchema = z.object({ id: z.string().nullable(), key: z.string(), source: z.enum(["computed", "marked"]), reason: z.string().nullable(), status: z.enum(["open", "resolved", "dismissed"]), startFrame: z.number(), endFrame: z.number(), startTimecode: z.string(), endTimecode: z.string(), segmentId: z.string().nullable(), note: z.string() });
-const coverageSchema = z
-  .object({
-    rate: rateSchema,
-    totalFrames: z.number(),
-    segments: z.array(z.object({ id: z.string(), kind: z.string(), stepId: z.string().nullable(), text: z.string(), start: z.number(), end: z.number(), startTimecode: z.string(), endTimecode: z.string() })),
-    thresholds: z.object({ voiceOverGapFrames: z.number(), toCameraMaxFrames: z.number() }),
-    gaps: z.array(gapViewSchema),
-    openGaps: z.number(),
-    voiceOverFrames: z.number(),
-    coveredVoiceOverFrames: z.number(),
-    coverage: z.number(),
-    ranges: z.array(z.object({ id: z.string(), clipId: z.string().nullable(), clipInFrame: z.number(), startFrame: z.number(), endFrame: z.number(), startTimecode: z.string(), endTimecode: z.string(), note: z.string() })),
-  })
-  .meta({ id: "Coverage" });
-
 export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/health", summary: "Database and storage status", auth: false, response: z.object({ ok: z.boolean(), database: z.object({ ok: z.boolean() }), storage: z.object({ ok: z.boolean() }) }), errors: [503] },
   { method: "get", path: "/api/channels", summary: "Channels I belong to, with my roles", response: z.object({ channels: z.array(channelSchema) }), errors: [401] },

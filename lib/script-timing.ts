@@ -95,3 +95,8 @@ export function timeScript(segments: TimingSegment[], rate: Rate, opts: { wpm?: 
   const targetFrames = opts.targetSeconds != null ? msToFrames(opts.targetSeconds * 1000, rate) : null;
   return { segments: out, totalFrames, byKind, byStep, targetFrames, overFrames: targetFrames != null ? totalFrames - targetFrames : null };
 }
+
+/** Two segments' texts as one: joined by one space, outer whitespace of the seam dropped. */
+export function joinSegmentTexts(first: string, second: string): string {
+  return [first.trimEnd(), second.trimStart()].filter(Boolean).join(" ");
+}

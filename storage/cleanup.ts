@@ -1,3 +1,4 @@
+import "server-only";
 import { abortUpload, listStaleUploads } from "./multipart";
 
 /** Aborts multipart uploads under a prefix that were started before a date; returns how many. */

@@ -1,3 +1,4 @@
+import "server-only";
 import crypto from "node:crypto";
 
 /**
@@ -30,7 +31,7 @@ const TYPE_BY_EXTENSION: Record<string, string> = Object.fromEntries(Object.entr
 /** channel/<channelId>/<kind>/<random>.<ext>, generated here and nowhere else. */
 export function newObjectKey(channelId: string, kind: "footage" | "photo", contentType: string): string {
   const ext = EXTENSION_BY_TYPE[contentType] ?? "bin";
-  return `channel/${channelId}/${kind}/${crypto.randomUUID()}.${ext}`;
+  return `${channelKeyPrefix(channelId)}${kind}/${crypto.randomUUID()}.${ext}`;
 }
 
 /**
@@ -43,4 +44,9 @@ export function servedAs(key: string): { contentType: string; disposition: "inli
   const type = TYPE_BY_EXTENSION[ext];
   if (type && /^(image\/(jpeg|png|webp)|video\/(mp4|webm|quicktime)|audio\/)/.test(type)) return { contentType: type, disposition: "inline" };
   return { contentType: "application/octet-stream", disposition: "attachment" };
+}
+
+/** The prefix every key of one channel (or, without an id, of every channel) starts with: for listing, never for access checks. */
+export function channelKeyPrefix(channelId?: string): string {
+  return channelId ? `channel/${channelId}/` : "channel/";
 }

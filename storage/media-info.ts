@@ -1,3 +1,4 @@
+import "server-only";
 /**
  * Reads a stored clip's technical metadata with MediaInfo (mediainfo.js,
  * WebAssembly) through ranged reads of the object: the file is never

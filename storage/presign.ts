@@ -1,3 +1,4 @@
+import "server-only";
 import { PutObjectCommand, GetObjectCommand } from "@aws-sdk/client-s3";
 import { getSignedUrl } from "@aws-sdk/s3-request-presigner";
 import { bucket, s3 } from "./s3";

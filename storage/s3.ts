@@ -1,4 +1,5 @@
-import { S3Client, HeadBucketCommand } from "@aws-sdk/client-s3";
+import "server-only";
+import { S3Client, HeadBucketCommand, HeadObjectCommand } from "@aws-sdk/client-s3";
 import { env } from "../lib/env";
 
 const g = globalThis as unknown as { __jigboardS3?: S3Client };
@@ -34,4 +35,12 @@ export async function storageHealthy(): Promise<{ ok: boolean; detail?: string }
   } catch (e) {
     return { ok: false, detail: e instanceof Error ? e.name : "unreachable" };
   }
+}
+
+/** The stored object's size and type, or null when there is none. */
+export async function headObject(key: string): Promise<{ size: number | undefined; contentType: string | undefined } | null> {
+  const head = await s3()
+    .send(new HeadObjectCommand({ Bucket: bucket(), Key: key }))
+    .catch(() => null);
+  return head ? { size: head.ContentLength, contentType: head.ContentType } : null;
 }

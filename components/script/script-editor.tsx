@@ -4,7 +4,7 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { DndContext, KeyboardSensor, PointerSensor, closestCenter, useSensor, useSensors, type DragEndEvent } from "@dnd-kit/core";
 import { SortableContext, arrayMove, sortableKeyboardCoordinates, verticalListSortingStrategy } from "@dnd-kit/sortable";
-import { SEGMENT_KINDS, SEGMENT_KIND_LABELS, timeScript, MIN_WPM, MAX_WPM, type SegmentKind } from "@/lib/script-timing";
+import { SEGMENT_KINDS, SEGMENT_KIND_LABELS, timeScript, DEFAULT_WPM, MIN_WPM, MAX_WPM, type SegmentKind } from "@/lib/script-timing";
 import { buildChapters } from "@/lib/chapters";
 import { formatDuration, formatTimecode, framesToSeconds, type Rate } from "@/lib/timecode";
 import { Notice } from "@/components/ui/field";
@@ -362,7 +362,7 @@ export function ScriptEditor(p: Props) {
                 await refresh();
               }}
             >
-              <option value="">Default (150 wpm)</option>
+              <option value="">Default ({DEFAULT_WPM} wpm)</option>
               {p.members.map((m) => (
                 <option key={m.id} value={m.id}>
                   {m.name}

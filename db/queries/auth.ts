@@ -1,6 +1,6 @@
 import "server-only";
 import { and, eq, gt, isNull, sql } from "drizzle-orm";
-import { db } from "../client";
+import { db, type Tx } from "../client";
 import { invitations, memberships, passwordResets, signInAttempts, users, channels } from "../schema";
 import type { Role } from "../../lib/roles";
 
@@ -56,38 +56,38 @@ export async function getOpenInvitationByTokenHash({ tokenHash }: { tokenHash: s
   return row ?? null;
 }
 
-/**
- * Accepts an invitation in one transaction: creates the account (or uses the
- * existing one with that e-mail, when the password matches, checked by the
- * caller), adds or merges the membership, and spends the token.
- */
-export async function acceptInvitation({ tokenHash, name, passwordHash }: { tokenHash: string; name: string; passwordHash: string }) {
-  return db().transaction(async (tx) => {
-    const [inv] = await tx
-      .select()
-      .from(invitations)
-      .where(and(eq(invitations.tokenHash, tokenHash), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())))
-      .for("update")
-      .limit(1);
-    if (!inv) return null;
-    let [user] = await tx.select().from(users).where(eq(users.email, inv.email)).limit(1);
-    if (!user) {
-      [user] = await tx.insert(users).values({ email: inv.email, name, passwordHash }).returning();
-    }
-    const [existing] = await tx
-      .select()
-      .from(memberships)
-      .where(and(eq(memberships.channelId, inv.channelId), eq(memberships.userId, user!.id)))
-      .limit(1);
-    if (existing) {
-      const merged = Array.from(new Set([...existing.roles, ...inv.roles]));
-      await tx.update(memberships).set({ roles: merged }).where(and(eq(memberships.channelId, inv.channelId), eq(memberships.userId, user!.id)));
-    } else {
-      await tx.insert(memberships).values({ channelId: inv.channelId, userId: user!.id, roles: inv.roles });
-    }
-    await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
-    return { userId: user!.id, email: inv.email, channelId: inv.channelId };
-  });
+/** An open invitation by its token hash, locked for this transaction. */
+export async function lockOpenInvitation(tx: Tx, tokenHash: string) {
+  const [row] = await tx
+    .select()
+    .from(invitations)
+    .where(and(eq(invitations.tokenHash, tokenHash), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())))
+    .for("update")
+    .limit(1);
+  return row ?? null;
+}
+
+export async function markInvitationAccepted(tx: Tx, id: string) {
+  await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, id));
+}
+
+export async function getUserByEmailTx(tx: Tx, email: string) {
+  const [row] = await tx.select().from(users).where(eq(users.email, email)).limit(1);
+  return row ?? null;
+}
+
+export async function insertUser(tx: Tx, v: { email: string; name: string; passwordHash: string }) {
+  const [row] = await tx.insert(users).values(v).returning();
+  return row!;
+}
+
+export async function getMembershipRow(tx: Tx, channelId: string, userId: string) {
+  const [row] = await tx.select().from(memberships).where(and(eq(memberships.channelId, channelId), eq(memberships.userId, userId))).limit(1);
+  return row ?? null;
+}
+
+export async function insertMembership(tx: Tx, v: { channelId: string; userId: string; roles: Role[] }) {
+  await tx.insert(memberships).values(v);
 }
 
 /** Ends every session of the account: tokens carry the version they were signed with. */
@@ -102,21 +102,24 @@ export async function createPasswordReset(v: { userId: string; tokenHash: string
   await db().insert(passwordResets).values(v);
 }
 
-/** Spends a reset token and sets the new password in one transaction; null when the token is unknown, used or expired. */
-export async function consumePasswordReset({ tokenHash, passwordHash }: { tokenHash: string; passwordHash: string }) {
-  return db().transaction(async (tx) => {
-    const [row] = await tx
-      .update(passwordResets)
-      .set({ usedAt: new Date() })
-      .where(and(eq(passwordResets.tokenHash, tokenHash), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, new Date())))
-      .returning();
-    if (!row) return null;
-    // Every other outstanding link for the account dies with this one, and every session signed before now ends.
-    await tx.update(passwordResets).set({ usedAt: new Date() }).where(and(eq(passwordResets.userId, row.userId), isNull(passwordResets.usedAt)));
-    await tx
-      .update(users)
-      .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
-      .where(eq(users.id, row.userId));
-    return row.userId;
-  });
+/** Spends one unexpired, unused reset token; the row, or null. */
+export async function spendResetToken(tx: Tx, tokenHash: string) {
+  const [row] = await tx
+    .update(passwordResets)
+    .set({ usedAt: new Date() })
+    .where(and(eq(passwordResets.tokenHash, tokenHash), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, new Date())))
+    .returning();
+  return row ?? null;
+}
+
+export async function spendAllResetTokens(tx: Tx, userId: string) {
+  await tx.update(passwordResets).set({ usedAt: new Date() }).where(and(eq(passwordResets.userId, userId), isNull(passwordResets.usedAt)));
+}
+
+/** Sets a new password hash and bumps the session version, which ends every older session. */
+export async function setPasswordAndEndSessions(tx: Tx, userId: string, passwordHash: string) {
+  await tx
+    .update(users)
+    .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
 }

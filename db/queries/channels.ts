@@ -1,6 +1,6 @@
 import "server-only";
 import { and, asc, eq, isNull } from "drizzle-orm";
-import { db } from "../client";
+import { db, type Q, type Tx } from "../client";
 import { channels, memberships, users } from "../schema";
 import type { Role } from "../../lib/roles";
 
@@ -37,21 +37,13 @@ export async function listMembersByChannel({ channelId }: { channelId: string })
     .orderBy(asc(users.name));
 }
 
-export async function updateMemberRoles({ channelId, userId, roles }: { channelId: string; userId: string; roles: Role[] }) {
-  return db().transaction(async (tx) => {
-    // Lock the channel's memberships so two owners cannot demote each other at once.
-    const rows = await tx
-      .select({ userId: memberships.userId, roles: memberships.roles })
-      .from(memberships)
-      .where(eq(memberships.channelId, channelId))
-      .for("update");
-    const target = rows.find((r) => r.userId === userId);
-    if (!target) return { ok: false as const, reason: "not_found" as const };
-    const ownersAfter = rows.filter((r) => (r.userId === userId ? roles.includes("owner") : r.roles.includes("owner"))).length;
-    if (ownersAfter === 0) return { ok: false as const, reason: "last_owner" as const };
-    await tx.update(memberships).set({ roles }).where(and(eq(memberships.channelId, channelId), eq(memberships.userId, userId)));
-    return { ok: true as const };
-  });
+/** Every membership of the channel, locked for this transaction (so two owners cannot demote each other at once). */
+export async function lockMemberships(tx: Tx, channelId: string) {
+  return tx.select({ userId: memberships.userId, roles: memberships.roles }).from(memberships).where(eq(memberships.channelId, channelId)).for("update");
+}
+
+export async function setMemberRoles(tx: Q, channelId: string, userId: string, roles: Role[]) {
+  await tx.update(memberships).set({ roles }).where(and(eq(memberships.channelId, channelId), eq(memberships.userId, userId)));
 }
 
 export async function updateChannel({ id, patch }: { id: string; patch: Partial<Pick<typeof channels.$inferInsert, "name" | "units" | "currency" | "brollGapMs" | "toCameraMaxMs">> }) {

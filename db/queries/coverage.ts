@@ -61,10 +61,11 @@ export async function updateGap({ id, patch }: { id: string; patch: Partial<Pick
   return row ?? null;
 }
 
-/** Stored computed gaps that no longer compute (B-roll now covers them) are resolved. */
-export async function resolveClosedGaps({ episodeId, stillOpen }: { episodeId: string; stillOpen: (g: Gap) => boolean }) {
-  const stored = await db().select().from(gaps).where(and(eq(gaps.episodeId, episodeId), eq(gaps.source, "computed"), eq(gaps.status, "open")));
-  const closed = stored.filter((g) => !stillOpen(g)).map((g) => g.id);
-  if (closed.length) await db().update(gaps).set({ status: "resolved" }).where(inArray(gaps.id, closed));
-  return closed.length;
+/** Kept computed gaps that are still open. */
+export async function listOpenComputedGaps({ episodeId }: { episodeId: string }) {
+  return db().select().from(gaps).where(and(eq(gaps.episodeId, episodeId), eq(gaps.source, "computed"), eq(gaps.status, "open")));
+}
+
+export async function resolveGaps({ ids }: { ids: string[] }) {
+  if (ids.length) await db().update(gaps).set({ status: "resolved" }).where(inArray(gaps.id, ids));
 }

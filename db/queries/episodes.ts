@@ -1,31 +1,8 @@
 import "server-only";
 import { and, asc, eq, gte, isNotNull, isNull, lt, ne, sql } from "drizzle-orm";
-import { db, type Tx } from "../client";
-import { lockEpisode } from "./episode-lock";
-import { channels, episodes, type Episode } from "../schema";
+import { db, type Q, type Tx } from "../client";
+import { channels, episodes } from "../schema";
 import type { Stage } from "../../lib/stages";
-import type { EpisodeCreate, EpisodeDto, EpisodeUpdate } from "../../lib/schemas/episode";
-
-export function toEpisodeDto(e: Episode): EpisodeDto {
-  return {
-    id: e.id,
-    channelId: e.channelId,
-    title: e.title,
-    summary: e.summary,
-    stage: e.stage,
-    position: e.position,
-    targetRuntimeSeconds: e.targetRuntimeSeconds,
-    publishDate: e.publishDate,
-    frameRate: e.frameRate,
-    dropFrame: e.dropFrame,
-    presenterId: e.presenterId,
-    createdBy: e.createdBy,
-    updatedBy: e.updatedBy,
-    createdAt: e.createdAt.toISOString(),
-    updatedAt: e.updatedAt.toISOString(),
-    archivedAt: e.archivedAt ? e.archivedAt.toISOString() : null,
-  };
-}
 
 export async function listEpisodesByChannel({
   channelId,
@@ -60,11 +37,12 @@ export async function getEpisodeById({ id }: { id: string }) {
 }
 
 /** Serialises every board write in a channel: positions stay dense and unique per stage. */
-async function lockChannel(tx: Tx, channelId: string) {
+export async function lockChannel(tx: Tx, channelId: string) {
   await tx.select({ id: channels.id }).from(channels).where(eq(channels.id, channelId)).for("update");
 }
 
-async function columnIds(tx: Tx, channelId: string, stage: Stage, excludeId?: string) {
+/** The ids of a stage's column in board order (archived episodes are not on the board). */
+export async function columnIds(tx: Tx, channelId: string, stage: Stage, excludeId?: string) {
   const rows = await tx
     .select({ id: episodes.id })
     .from(episodes)
@@ -80,7 +58,7 @@ async function columnIds(tx: Tx, channelId: string, stage: Stage, excludeId?: st
   return rows.map((r) => r.id);
 }
 
-async function writePositions(tx: Tx, ids: string[]) {
+export async function writeEpisodePositions(tx: Tx, ids: string[]) {
   if (ids.length === 0) return;
   // One statement for the whole column.
   const values = sql.join(
@@ -90,31 +68,50 @@ async function writePositions(tx: Tx, ids: string[]) {
   await tx.execute(sql`update episodes set position = v.pos from (values ${values}) as v(id, pos) where episodes.id = v.id`);
 }
 
-export async function createEpisode({ channelId, userId, input }: { channelId: string; userId: string; input: EpisodeCreate }) {
-  return db().transaction(async (tx) => {
-    await lockChannel(tx, channelId);
-    const [{ n }] = (await tx.execute(
-      sql`select count(*)::int as n from episodes where channel_id = ${channelId} and stage = ${input.stage} and archived_at is null`,
-    )).rows as [{ n: number }];
-    const [row] = await tx
-      .insert(episodes)
-      .values({ ...input, channelId, position: n, createdBy: userId, updatedBy: userId })
-      .returning();
-    return row!;
-  });
+export async function countActiveInStage(tx: Tx, channelId: string, stage: Stage) {
+  const [{ n }] = (await tx.execute(sql`select count(*)::int as n from episodes where channel_id = ${channelId} and stage = ${stage} and archived_at is null`)).rows as [{ n: number }];
+  return n;
 }
 
-/**
- * Applies field edits and/or a move in one transaction. A move puts the
- * episode at `position` in the target stage (clamped) and renumbers both
- * columns densely.
- */
+export async function insertEpisode(tx: Tx, values: typeof episodes.$inferInsert) {
+  const [row] = await tx.insert(episodes).values(values).returning();
+  return row!;
+}
+
+export async function getEpisodeInChannel(q: Q, id: string, channelId: string, { archived }: { archived?: boolean } = {}) {
+  const [row] = await q
+    .select()
+    .from(episodes)
+    .where(and(eq(episodes.id, id), eq(episodes.channelId, channelId), archived === undefined ? undefined : archived ? isNotNull(episodes.archivedAt) : isNull(episodes.archivedAt)))
+    .limit(1);
+  return row ?? null;
+}
+
+export async function updateEpisodeRow(tx: Tx, id: string, set: Partial<typeof episodes.$inferInsert>) {
+  const [row] = await tx
+    .update(episodes)
+    .set({ ...set, updatedAt: new Date() })
+    .where(eq(episodes.id, id))
+    .returning();
+  return row ?? null;
+}
+
+/** Archives an episode that is not archived yet; null otherwise. */
+export async function archiveEpisodeRow(tx: Tx, id: string, channelId: string, userId: string) {
+  const [row] = await tx
+    .update(episodes)
+    .set({ archivedAt: new Date(), updatedBy: userId, updatedAt: new Date() })
+    .where(and(eq(episodes.id, id), eq(episodes.channelId, channelId), isNull(episodes.archivedAt)))
+    .returning();
+  return row ?? null;
+}
+
 /**
  * Frames stored at one rate, re-expressed at another in one statement per
  * table: the same instants, rounded to the nearest frame (halves up), the
  * arithmetic of convertFrames in lib/timecode.ts. Ranges keep at least one frame.
  */
-async function convertStoredFrames(tx: Tx, episodeId: string, from: { num: number; den: number }, to: { num: number; den: number }) {
+export async function convertStoredFrames(tx: Tx, episodeId: string, from: { num: number; den: number }, to: { num: number; den: number }) {
   const mul = to.num * from.den;
   const div = to.den * from.num;
   const conv = (col: string) => sql.raw(`((2::bigint * ${col} * ${mul} + ${div}) / (2::bigint * ${div}))::int`);
@@ -122,83 +119,4 @@ async function convertStoredFrames(tx: Tx, episodeId: string, from: { num: numbe
   await tx.execute(sql`update coverage_ranges set start_frame = ${conv("start_frame")}, end_frame = greatest(${conv("end_frame")}, ${conv("start_frame")} + 1), clip_in_frame = ${conv("clip_in_frame")} where episode_id = ${episodeId}`);
   await tx.execute(sql`update gaps set start_frame = ${conv("start_frame")}, end_frame = greatest(${conv("end_frame")}, ${conv("start_frame")} + 1) where episode_id = ${episodeId}`);
   await tx.execute(sql`update clips set in_frame = ${conv("in_frame")}, out_frame = ${conv("out_frame")} where episode_id = ${episodeId}`);
-}
-
-export async function updateEpisode({
-  id,
-  channelId,
-  userId,
-  patch,
-  check,
-  rates,
-}: {
-  id: string;
-  channelId: string;
-  userId: string;
-  patch: EpisodeUpdate;
-  /** Called with the locked row before writing; throws to refuse. */
-  check?: (current: Episode) => void;
-  /** When the frame rate changes: the old and new rates, so stored frame counts keep their time. */
-  rates?: (current: Episode) => { from: { num: number; den: number }; to: { num: number; den: number } } | null;
-}) {
-  return db().transaction(async (tx) => {
-    await lockChannel(tx, channelId);
-    const [current] = await tx.select().from(episodes).where(and(eq(episodes.id, id), eq(episodes.channelId, channelId))).limit(1);
-    if (!current) return null;
-    check?.(current);
-    const change = rates?.(current);
-    if (change) {
-      // The episode row before its rows, as every content write does.
-      await lockEpisode(tx, id);
-      await convertStoredFrames(tx, id, change.from, change.to);
-    }
-    const { stage, position, ...fields } = patch;
-    const moving = stage !== undefined || position !== undefined;
-    const toStage = stage ?? current.stage;
-
-    if (Object.keys(fields).length > 0 || moving) {
-      await tx
-        .update(episodes)
-        .set({ ...fields, stage: toStage, updatedBy: userId, updatedAt: new Date() })
-        .where(eq(episodes.id, id));
-    }
-    if (moving && !current.archivedAt) {
-      const target = await columnIds(tx, channelId, toStage, id);
-      const at = Math.max(0, Math.min(position ?? (toStage === current.stage ? current.position : target.length), target.length));
-      target.splice(at, 0, id);
-      await writePositions(tx, target);
-      if (toStage !== current.stage) await writePositions(tx, await columnIds(tx, channelId, current.stage));
-    }
-    const [after] = await tx.select().from(episodes).where(eq(episodes.id, id)).limit(1);
-    return { before: current, after: after! };
-  });
-}
-
-export async function archiveEpisode({ id, channelId, userId }: { id: string; channelId: string; userId: string }) {
-  return db().transaction(async (tx) => {
-    await lockChannel(tx, channelId);
-    const [row] = await tx
-      .update(episodes)
-      .set({ archivedAt: new Date(), updatedBy: userId, updatedAt: new Date() })
-      .where(and(eq(episodes.id, id), eq(episodes.channelId, channelId), isNull(episodes.archivedAt)))
-      .returning();
-    if (row) await writePositions(tx, await columnIds(tx, channelId, row.stage));
-    return row ?? null;
-  });
-}
-
-/** Brings an archived episode back to the end of its stage's column. */
-export async function restoreEpisode({ id, channelId, userId }: { id: string; channelId: string; userId: string }) {
-  return db().transaction(async (tx) => {
-    await lockChannel(tx, channelId);
-    const [current] = await tx.select().from(episodes).where(and(eq(episodes.id, id), eq(episodes.channelId, channelId), isNotNull(episodes.archivedAt)));
-    if (!current) return null;
-    const column = await columnIds(tx, channelId, current.stage);
-    const [row] = await tx
-      .update(episodes)
-      .set({ archivedAt: null, position: column.length, updatedBy: userId, updatedAt: new Date() })
-      .where(eq(episodes.id, id))
-      .returning();
-    return row ?? null;
-  });
 }

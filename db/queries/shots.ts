@@ -1,26 +1,8 @@
 import "server-only";
 import { and, asc, eq, inArray } from "drizzle-orm";
-import { db } from "../client";
-import { lockEpisode } from "./episode-lock";
-import { buildSteps, episodes, gaps, scriptSegments, shots, type Gap, type Shot } from "../schema";
-import type { ShotCreate, ShotKind, ShotUpdate, ShotStatus } from "../../lib/schemas/footage";
-
-export function toShotDto(s: Shot) {
-  return {
-    id: s.id,
-    kind: s.kind,
-    description: s.description,
-    framing: s.framing,
-    cameraNotes: s.cameraNotes,
-    priority: s.priority,
-    status: s.status,
-    stepId: s.stepId,
-    segmentId: s.segmentId,
-    shootDayId: s.shootDayId,
-    gapId: s.gapId,
-    position: s.position,
-  };
-}
+import { db, type Tx } from "../client";
+import { buildSteps, episodes, gaps, scriptSegments, shots } from "../schema";
+import type { ShotStatus } from "../../lib/schemas/footage";
 
 export async function listShotsByEpisode({ episodeId }: { episodeId: string }) {
   return db().select().from(shots).where(eq(shots.episodeId, episodeId)).orderBy(asc(shots.position), asc(shots.createdAt));
@@ -49,83 +31,59 @@ export async function linksBelong({ episodeId, stepId, segmentId }: { episodeId:
   return null;
 }
 
-export async function createShots({ episodeId, rows }: { episodeId: string; rows: (ShotCreate & { gapId?: string | null })[] }) {
-  return db().transaction(async (tx) => {
-    await lockEpisode(tx, episodeId);
-    const existing = await tx.select({ id: shots.id }).from(shots).where(eq(shots.episodeId, episodeId));
-    if (!rows.length) return [];
-    return tx
-      .insert(shots)
-      .values(rows.map((r, i) => ({ ...r, episodeId, position: existing.length + i })))
-      .returning();
-  });
+export async function countShots(tx: Tx, episodeId: string) {
+  const rows = await tx.select({ id: shots.id }).from(shots).where(eq(shots.episodeId, episodeId));
+  return rows.length;
 }
 
-export async function updateShot({ id, episodeId, patch }: { id: string; episodeId: string; patch: ShotUpdate }) {
-  return db().transaction(async (tx) => {
-    await lockEpisode(tx, episodeId);
-    const [row] = await tx.update(shots).set(patch).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
-    return row ?? null;
-  });
+export async function insertShots(tx: Tx, rows: (typeof shots.$inferInsert)[]) {
+  if (!rows.length) return [];
+  return tx.insert(shots).values(rows).returning();
 }
 
-export async function deleteShot({ id, episodeId }: { id: string; episodeId: string }) {
-  return db().transaction(async (tx) => {
-    await lockEpisode(tx, episodeId);
-    const [row] = await tx.delete(shots).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
-    return row ?? null;
-  });
+export async function updateShotRow(tx: Tx, id: string, episodeId: string, patch: Partial<typeof shots.$inferInsert>) {
+  const [row] = await tx.update(shots).set(patch).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
+  return row ?? null;
 }
 
-/** Sets one status on many shots of one episode in one statement; ids of other episodes are not touched. */
-export async function setShotStatus({ episodeId, ids, status }: { episodeId: string; ids: string[]; status: ShotStatus }) {
-  return db().transaction(async (tx) => {
-    await lockEpisode(tx, episodeId);
-    const found = await tx.select({ id: shots.id }).from(shots).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
-    if (found.length !== ids.length) return null;
-    await tx.update(shots).set({ status }).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
-    return found.length;
-  });
+export async function deleteShotRow(tx: Tx, id: string, episodeId: string) {
+  const [row] = await tx.delete(shots).where(and(eq(shots.id, id), eq(shots.episodeId, episodeId))).returning();
+  return row ?? null;
 }
 
-/** A pickup shot for a gap, linked to the gap and its segment, in one transaction with the gap row. */
-export async function createPickup({
-  episodeId,
-  gap,
-  description,
-  kind,
-}: {
-  episodeId: string;
-  gap: { id?: string; startFrame: number; endFrame: number; segmentId: string | null; reason: Gap["reason"]; note?: string };
-  description: string;
-  kind: ShotKind;
-}) {
-  return db().transaction(async (tx) => {
-    // Under the episode lock, so two clicks on the same gap cannot both make a pickup.
-    await lockEpisode(tx, episodeId);
-    let gapId = gap.id;
-    if (!gapId) {
-      const [kept] = await tx
-        .select({ id: gaps.id })
-        .from(gaps)
-        .where(and(eq(gaps.episodeId, episodeId), eq(gaps.source, "computed"), eq(gaps.startFrame, gap.startFrame), eq(gaps.endFrame, gap.endFrame)))
-        .limit(1);
-      gapId = kept?.id;
-    }
-    if (gapId) {
-      const [already] = await tx.select().from(shots).where(and(eq(shots.episodeId, episodeId), eq(shots.gapId, gapId))).limit(1);
-      if (already) return { duplicate: already };
-    } else {
-      const [g] = await tx
-        .insert(gaps)
-        .values({ episodeId, startFrame: gap.startFrame, endFrame: gap.endFrame, segmentId: gap.segmentId, source: "computed", reason: gap.reason, status: "open", note: gap.note ?? "" })
-        .returning();
-      gapId = g!.id;
-    }
-    const existing = await tx.select({ id: shots.id }).from(shots).where(eq(shots.episodeId, episodeId));
-    const [shot] = await tx.insert(shots).values({ episodeId, kind, description, status: "planned", priority: 1, segmentId: gap.segmentId, gapId, position: existing.length }).returning();
-    return { shot: shot!, gapId };
-  });
+/** Which of the ids are shots of the episode. */
+export async function findShotIds(tx: Tx, episodeId: string, ids: string[]) {
+  const rows = await tx.select({ id: shots.id }).from(shots).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
+  return rows.map((r) => r.id);
+}
+
+export async function setStatusOfShots(tx: Tx, episodeId: string, ids: string[], status: ShotStatus) {
+  await tx.update(shots).set({ status }).where(and(eq(shots.episodeId, episodeId), inArray(shots.id, ids)));
+}
+
+/** A planned shot becomes captured (a clip was linked to it); other statuses stay. */
+export async function markShotCaptured(tx: Tx, shotId: string) {
+  await tx.update(shots).set({ status: "captured" }).where(and(eq(shots.id, shotId), eq(shots.status, "planned")));
+}
+
+/** The kept row of a computed gap, matched by its frames. */
+export async function findComputedGap(tx: Tx, episodeId: string, startFrame: number, endFrame: number) {
+  const [row] = await tx
+    .select({ id: gaps.id })
+    .from(gaps)
+    .where(and(eq(gaps.episodeId, episodeId), eq(gaps.source, "computed"), eq(gaps.startFrame, startFrame), eq(gaps.endFrame, endFrame)))
+    .limit(1);
+  return row?.id ?? null;
+}
+
+export async function findPickupOfGap(tx: Tx, episodeId: string, gapId: string) {
+  const [row] = await tx.select().from(shots).where(and(eq(shots.episodeId, episodeId), eq(shots.gapId, gapId))).limit(1);
+  return row ?? null;
+}
+
+export async function insertGapRow(tx: Tx, values: typeof gaps.$inferInsert) {
+  const [row] = await tx.insert(gaps).values(values).returning();
+  return row!;
 }
 
 /** Shots captured or better, and all shots not rejected, per episode. */

@@ -182,3 +182,77 @@ export type ToolUpdate = z.output<typeof toolUpdateSchema>;
 export function isSponsoredAcquisition(a: string): boolean {
   return a === "gifted" || a === "loaned" || a === "paid_placement";
 }
+
+// ---- Responses: one schema per resource, used by the views (typed), the OpenAPI document and the browser.
+
+export const toolSchema = z
+  .object({ id: z.string(), name: z.string(), kind: z.enum(TOOL_KINDS), acquisition: z.enum(ACQUISITIONS), sponsorId: z.string().nullable(), sponsored: z.boolean(), caution: z.string(), photoKey: z.string().nullable() })
+  .meta({ id: "Tool" });
+export type ToolDto = z.infer<typeof toolSchema>;
+
+const stepTimingSchema = z.object({ start: z.number(), activeEnd: z.number(), end: z.number() });
+export const planStepSchema = z
+  .object({
+    id: z.string(),
+    position: z.number(),
+    title: z.string(),
+    notes: z.string(),
+    activeMinutes: z.number(),
+    waitMinutes: z.number(),
+    waitReason: z.string(),
+    crewNeeded: z.number(),
+    coverageKinds: z.array(z.enum(COVERAGE_KINDS)),
+    hazards: z.array(z.string()),
+    cautions: z.array(z.enum(HAZARDS)),
+    dependsOn: z.array(z.string()),
+    toolIds: z.array(z.string()),
+    status: z.enum(STEP_STATUSES),
+    failureNote: z.string().nullable(),
+    failurePhotoUrl: z.string().nullable(),
+    remedyOfStepId: z.string().nullable(),
+    /** Elapsed minutes from the first step, with enough people for everything. */
+    timing: stepTimingSchema,
+    /** The same chain with hands-on time counted against the team's people. */
+    crewTiming: stepTimingSchema.extend({ crewDelayMinutes: z.number() }),
+  })
+  .meta({ id: "PlanStep" });
+export type PlanStepDto = z.infer<typeof planStepSchema>;
+
+export const planSchema = z
+  .object({
+    steps: z.array(planStepSchema),
+    timing: z.object({ totalActiveMinutes: z.number(), totalWaitMinutes: z.number(), criticalPathMinutes: z.number(), criticalPath: z.array(z.string()) }),
+    crew: z.object({ team: z.number(), finishMinutes: z.number(), overCrew: z.array(z.string()) }),
+    toolsUsed: z.array(toolSchema.extend({ steps: z.array(z.string()) })),
+  })
+  .meta({ id: "BuildPlan" });
+export type PlanDto = z.infer<typeof planSchema>;
+
+const figuresSchema = z.object({ boardFeet: z.number(), cubicMetres: z.number(), sheets: z.number(), linearFeet: z.number(), costMinor: z.number() });
+export const materialSchema = z
+  .object({
+    id: z.string(),
+    partName: z.string(),
+    material: z.string(),
+    unit: z.enum(["in", "mm"]),
+    thickness: z.number(),
+    width: z.number(),
+    length: z.number(),
+    quantity: z.number(),
+    sizing: z.enum(["nominal", "actual"]),
+    pricingUnit: z.enum(PRICING_UNITS),
+    unitPriceMinor: z.number(),
+    currency: z.string(),
+    wastePercent: z.number(),
+    stepId: z.string().nullable(),
+    supplierNote: z.string(),
+    figures: figuresSchema,
+  })
+  .meta({ id: "MaterialRow" });
+export type MaterialDto = z.infer<typeof materialSchema>;
+
+const materialTotalSchema = z.object({ material: z.string(), boardFeet: z.number(), cubicMetres: z.number(), sheetsToBuy: z.number(), costMinor: z.number(), rows: z.number() });
+export const cutListSchema = z
+  .object({ rows: z.array(materialSchema), totals: z.object({ byMaterial: z.array(materialTotalSchema), total: materialTotalSchema.omit({ material: true }) }) })
+  .meta({ id: "CutList" });
+export type CutListDto = z.infer<typeof cutListSchema>;

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { rateSchema } from "./script";
+import { SEGMENT_KINDS } from "../script-timing";
 
 export const SHOT_KINDS = ["to_camera", "broll", "overhead", "close_up", "insert", "time_lapse", "slow_motion", "pickup"] as const;
 export type ShotKind = (typeof SHOT_KINDS)[number];
@@ -185,3 +187,63 @@ export function formatBytes(n: number): string {
   }
   return `${Number.isInteger(v) ? v : v.toFixed(1)} ${units[i]}`;
 }
+
+// ---- Responses: one schema per resource, used by the views (typed), the OpenAPI document and the browser.
+
+export const shotSchema = z
+  .object({ id: z.string(), kind: z.enum(SHOT_KINDS), description: z.string(), framing: z.string(), cameraNotes: z.string(), priority: z.number(), status: z.enum(SHOT_STATUSES), stepId: z.string().nullable(), segmentId: z.string().nullable(), shootDayId: z.string().nullable(), gapId: z.string().nullable(), position: z.number() })
+  .meta({ id: "Shot" });
+export type ShotDto = z.infer<typeof shotSchema>;
+
+export const clipSchema = z
+  .object({
+    id: z.string(),
+    episodeId: z.string(),
+    shotId: z.string().nullable(),
+    state: z.enum(["uploading", "stored"]),
+    originalName: z.string(),
+    sizeBytes: z.number(),
+    partSize: z.number().nullable(),
+    contentType: z.string(),
+    durationMs: z.number().nullable(),
+    frameRate: z.string().nullable(),
+    width: z.number().nullable(),
+    height: z.number().nullable(),
+    startTimecode: z.string().nullable(),
+    checksum: z.string().nullable(),
+    inFrame: z.number().nullable(),
+    outFrame: z.number().nullable(),
+    createdAt: z.string(),
+  })
+  .meta({ id: "Clip" });
+export type ClipDto = z.infer<typeof clipSchema>;
+
+export const gapViewSchema = z.object({
+  id: z.string().nullable(),
+  key: z.string(),
+  source: z.enum(["computed", "marked"]),
+  reason: z.string().nullable(),
+  status: z.enum(["open", "resolved", "dismissed"]),
+  startFrame: z.number(),
+  endFrame: z.number(),
+  startTimecode: z.string(),
+  endTimecode: z.string(),
+  segmentId: z.string().nullable(),
+  note: z.string(),
+  pickupShotId: z.string().nullable(),
+});
+export const coverageSchema = z
+  .object({
+    rate: rateSchema,
+    totalFrames: z.number(),
+    segments: z.array(z.object({ id: z.string(), kind: z.enum(SEGMENT_KINDS), stepId: z.string().nullable(), text: z.string(), start: z.number(), end: z.number(), startTimecode: z.string(), endTimecode: z.string() })),
+    thresholds: z.object({ voiceOverGapFrames: z.number(), toCameraMaxFrames: z.number() }),
+    gaps: z.array(gapViewSchema),
+    openGaps: z.number(),
+    voiceOverFrames: z.number(),
+    coveredVoiceOverFrames: z.number(),
+    coverage: z.number(),
+    ranges: z.array(z.object({ id: z.string(), clipId: z.string().nullable(), clipInFrame: z.number(), startFrame: z.number(), endFrame: z.number(), startTimecode: z.string(), endTimecode: z.string(), note: z.string() })),
+  })
+  .meta({ id: "Coverage" });
+export type CoverageDto = z.infer<typeof coverageSchema>;

@@ -86,3 +86,59 @@ export const readingRateSchema = z
   .object({ readingRateWpm: z.number().int("whole words a minute").min(MIN_WPM, `at least ${MIN_WPM} words a minute`).max(MAX_WPM, `at most ${MAX_WPM} words a minute`) })
   .strict()
   .meta({ id: "ReadingRate" });
+
+// ---- Responses: one schema per resource, used by the views (typed), the OpenAPI document and the browser.
+
+export const segmentSchema = z
+  .object({
+    id: z.string(),
+    position: z.number(),
+    kind: z.enum(SEGMENT_KINDS),
+    text: z.string(),
+    stepId: z.string().nullable(),
+    pinnedStartFrame: z.number().nullable(),
+    explicitDurationFrames: z.number().nullable(),
+    editorNotes: z.string(),
+    chapterStart: z.boolean(),
+    chapterTitle: z.string().nullable(),
+    version: z.number(),
+    updatedBy: z.string().nullable(),
+    updatedAt: z.string(),
+  })
+  .meta({ id: "Segment" });
+export type SegmentDto = z.infer<typeof segmentSchema>;
+
+export const segmentTimingSchema = z.object({
+  start: z.number(),
+  end: z.number(),
+  duration: z.number(),
+  estimatedStart: z.number(),
+  drift: z.number().nullable(),
+  words: z.number(),
+  source: z.enum(["explicit", "reading", "caption"]),
+  startTimecode: z.string(),
+  endTimecode: z.string(),
+  durationSeconds: z.number(),
+});
+export const chaptersSchema = z.object({
+  chapters: z.array(z.object({ segmentId: z.string(), title: z.string(), startSeconds: z.number(), line: z.string(), problems: z.array(z.string()) })),
+  problems: z.array(z.string()),
+  valid: z.boolean(),
+  text: z.string(),
+});
+export const totalsSchema = z.object({
+  frames: z.number(),
+  timecode: z.string(),
+  seconds: z.number(),
+  targetFrames: z.number().nullable(),
+  overFrames: z.number().nullable(),
+  overSeconds: z.number().nullable(),
+  byKind: z.record(z.string(), z.number()),
+  byStep: z.record(z.string(), z.number()),
+});
+export const rateSchema = z.object({ id: z.enum(FRAME_RATE_IDS as [FrameRateId, ...FrameRateId[]]), dropFrame: z.boolean(), num: z.number(), den: z.number() });
+export const timedSegmentSchema = segmentSchema.extend({ timing: segmentTimingSchema });
+export const scriptSchema = z
+  .object({ rate: rateSchema, wordsPerMinute: z.number(), segments: z.array(timedSegmentSchema), totals: totalsSchema, chapters: chaptersSchema })
+  .meta({ id: "Script" });
+export type ScriptDto = z.infer<typeof scriptSchema>;

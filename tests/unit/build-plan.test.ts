@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { crewTiming, findCycle, formatMinutes, planTiming, type CrewStep, type PlanStep } from "@/lib/build-plan";
+import { crewTiming, findCycle, formatMinutes, placeRemedy, planTiming, type CrewStep, type PlanStep } from "@/lib/build-plan";
 
 /** Reference: the longest path found by trying every path in the graph. */
 function bruteForceLongest(steps: PlanStep[]): number {
@@ -125,5 +125,26 @@ describe("build plan timing with crew counted", () => {
     const two = crewTiming(steps, 2);
     expect(two.steps.legs!.start).toBe(0);
     expect(two.overCrew).toEqual([]);
+  });
+});
+
+describe("placeRemedy (common practice, no published source: a fix goes between the failure and what waited for it)", () => {
+  const steps = [
+    { id: "glue", dependsOn: [], remedyOfStepId: null },
+    { id: "fix1", dependsOn: ["glue"], remedyOfStepId: "glue" },
+    { id: "sand", dependsOn: ["glue"], remedyOfStepId: null },
+    { id: "finish", dependsOn: ["sand"], remedyOfStepId: null },
+  ];
+  it("depends on the failed step, sits after its earlier remedies, and what waited for the failure waits for it", () => {
+    const p = placeRemedy(steps, "glue", "fix2", []);
+    expect(p.dependsOn).toEqual(["glue"]);
+    expect(p.order).toEqual(["glue", "fix1", "fix2", "sand", "finish"]);
+    expect(p.rewired).toEqual(["sand"]);
+  });
+  it("skips a rewiring that would make a loop", () => {
+    // The remedy itself waits for "sand", so "sand" cannot wait for the remedy.
+    const p = placeRemedy(steps, "glue", "fix2", ["sand"]);
+    expect(p.rewired).toEqual([]);
+    expect(findCycle([...steps, { id: "fix2", dependsOn: p.dependsOn }])).toBeNull();
   });
 });

@@ -1,5 +1,6 @@
 import { pageAccess } from "@/lib/server/access/page-access";
-import { listEpisodesByChannel, toEpisodeDto } from "@/db/queries/episodes";
+import { listEpisodesByChannel } from "@/db/queries/episodes";
+import { toEpisodeDto } from "@/lib/server/views/episode";
 import { Board } from "@/components/board/board";
 import { boardFigures } from "@/lib/server/views/board-figures";
 

@@ -50,12 +50,12 @@ async function main() {
   // Abandoned footage uploads (started more than a day ago) are aborted at every start.
   Object.assign(process.env, services.env, { NEXTAUTH_SECRET: authSecret(dataRoot) });
   try {
-    const { abortStaleUploads } = await import("../../../storage/cleanup");
-    const aborted = await abortStaleUploads("channel/", new Date(Date.now() - 24 * 3600 * 1000));
-    const pool = new pg.Pool({ connectionString: services.env.DATABASE_URL });
-    const removed = await pool.query("delete from clips where state = 'uploading' and created_at < now() - interval '1 day'");
-    await pool.end();
-    if (aborted || removed.rowCount) console.log(`[cleanup] aborted ${aborted} abandoned uploads, removed ${removed.rowCount} unfinished clips`);
+    // The same service as the owner's cleanup route.
+    const { cleanupAbandonedUploads } = await import("../services/upload-cleanup");
+    const { closeDb } = await import("../../../db/client");
+    const { abortedUploads, removedClips } = await cleanupAbandonedUploads();
+    await closeDb();
+    if (abortedUploads || removedClips) console.log(`[cleanup] aborted ${abortedUploads} abandoned uploads, removed ${removedClips} unfinished clips`);
   } catch (e) {
     console.error("[cleanup] skipped:", (e as Error).message);
   }

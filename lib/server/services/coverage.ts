@@ -1,25 +1,12 @@
 import "server-only";
-import { coverageOf } from "../views/coverage";
-import { scriptViewFor } from "../views/script";
+import { coverageFor } from "../views/coverage";
 import type { Episode } from "../../../db/schema";
-import { getChannelById } from "../../../db/queries/channels";
-import { listGapsByEpisode, listRangesByEpisode, resolveClosedGaps } from "../../../db/queries/coverage";
-import { listShotsByEpisode } from "../../../db/queries/shots";
-
-export async function coverageFor(episode: Episode) {
-  const [view, channel, ranges, stored, shots] = await Promise.all([
-    scriptViewFor(episode),
-    getChannelById({ id: episode.channelId }),
-    listRangesByEpisode({ episodeId: episode.id }),
-    listGapsByEpisode({ episodeId: episode.id }),
-    listShotsByEpisode({ episodeId: episode.id }),
-  ]);
-  const pickups = new Map(shots.filter((s) => s.gapId).map((s) => [s.gapId!, s.id]));
-  return { view, coverage: coverageOf(episode, channel!, view, ranges, stored, pickups) };
-}
+import { listOpenComputedGaps, resolveGaps } from "../../../db/queries/coverage";
 
 /** After B-roll changes: kept computed gaps that B-roll now covers are marked resolved. */
 export async function settleGaps(episode: Episode) {
-  const { coverage } = await coverageFor(episode);
-  await resolveClosedGaps({ episodeId: episode.id, stillOpen: coverage.stillComputed });
+  const [{ coverage }, open] = await Promise.all([coverageFor(episode), listOpenComputedGaps({ episodeId: episode.id })]);
+  const closed = open.filter((g) => !coverage.stillComputed(g)).map((g) => g.id);
+  await resolveGaps({ ids: closed });
+  return closed.length;
 }

@@ -1,9 +1,8 @@
 import "server-only";
-import { HeadObjectCommand } from "@aws-sdk/client-s3";
 import { AppError } from "../http/errors";
 import { newObjectKey } from "../../../storage/keys";
 import { presignPut } from "../../../storage/presign";
-import { bucket, s3 } from "../../../storage/s3";
+import { headObject } from "../../../storage/s3";
 import { createPendingUpload, getPendingUploadByKey, markPendingUploadUsed } from "../../../db/queries/uploads";
 import type { PendingUpload } from "../../../db/schema";
 
@@ -26,9 +25,7 @@ export async function claimUpload({ key, channelId, purpose, field }: { key: str
   const refuse = () => new AppError("unprocessable:upload.key", "That file was not uploaded here for this. Upload it again.", { fields: { [field]: ["not an upload issued to this channel for this purpose"] } });
   const issued = await getPendingUploadByKey({ key, channelId, purpose });
   if (!issued) throw refuse();
-  const head = await s3()
-    .send(new HeadObjectCommand({ Bucket: bucket(), Key: issued.key }))
-    .catch(() => null);
-  if (!head || head.ContentLength !== issued.sizeBytes || (head.ContentType && head.ContentType !== issued.contentType)) throw refuse();
+  const head = await headObject(issued.key);
+  if (!head || head.size !== issued.sizeBytes || (head.contentType && head.contentType !== issued.contentType)) throw refuse();
   await markPendingUploadUsed({ key: issued.key });
 }

@@ -4,7 +4,10 @@ import { computeCoverage, type ComputedGap, type GapView } from "../../coverage"
 export type { GapView };
 import { formatTimecode, msToFrames, rateOf } from "../../timecode";
 import type { Channel, CoverageRange, Episode, Gap } from "../../../db/schema";
-import type { scriptView } from "./script";
+import { scriptViewFor, type scriptView } from "./script";
+import { getChannelById } from "../../../db/queries/channels";
+import { listGapsByEpisode, listRangesByEpisode } from "../../../db/queries/coverage";
+import { listShotsByEpisode } from "../../../db/queries/shots";
 
 
 export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs" | "toCameraMaxMs">, view: ReturnType<typeof scriptView>, ranges: CoverageRange[], stored: Gap[], pickups: Map<string, string> = new Map()) {
@@ -45,4 +48,17 @@ export function coverageOf(episode: Episode, channel: Pick<Channel, "brollGapMs"
     stillComputed: (g: Gap) => report.gaps.some((c) => same(g, c)),
     ranges: ranges.map((r) => ({ id: r.id, clipId: r.clipId, clipInFrame: r.clipInFrame, startFrame: r.startFrame, endFrame: r.endFrame, startTimecode: tc(r.startFrame), endTimecode: tc(r.endFrame), note: r.note })),
   };
+}
+
+/** The episode's coverage as the API shows it, read fresh. */
+export async function coverageFor(episode: Episode) {
+  const [view, channel, ranges, stored, shots] = await Promise.all([
+    scriptViewFor(episode),
+    getChannelById({ id: episode.channelId }),
+    listRangesByEpisode({ episodeId: episode.id }),
+    listGapsByEpisode({ episodeId: episode.id }),
+    listShotsByEpisode({ episodeId: episode.id }),
+  ]);
+  const pickups = new Map(shots.filter((s) => s.gapId).map((s) => [s.gapId!, s.id]));
+  return { view, coverage: coverageOf(episode, channel!, view, ranges, stored, pickups) };
 }

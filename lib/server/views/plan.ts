@@ -1,50 +1,14 @@
 import "server-only";
-/** Shared checks and views for build-plan routes. */
-import { crewTiming, findCycle, planTiming } from "../../build-plan";
+/** The build plan as the API shows it: timing, crew timing, cautions, tools used. */
+import { crewTiming, planTiming } from "../../build-plan";
 import { stepHazards } from "../../safety";
-import { isSponsoredAcquisition, TIMING_FIELDS, type StepUpdate } from "../../schemas/build";
-import type { ChannelAccess } from "../access/access";
-import { assertCan } from "../access/access";
-import { AppError } from "../http/errors";
-import type { PlanContext, StepWithLinks } from "../../../db/queries/build";
+import { isSponsoredAcquisition, type PlanDto, type ToolDto } from "../../schemas/build";
+import type { StepWithLinks } from "../../../db/queries/build";
 import type { Tool } from "../../../db/schema";
 import { presignGet } from "../../../storage/presign";
 
-export function checkLinks(ctx: PlanContext, stepId: string | null, dependsOn?: string[], toolIds?: string[]) {
-  const fields: Record<string, string[]> = {};
-  if (dependsOn) {
-    const known = new Set(ctx.steps.map((s) => s.id));
-    if (stepId && dependsOn.includes(stepId)) (fields.dependsOn ??= []).push("a step cannot depend on itself");
-    const unknown = dependsOn.filter((d) => !known.has(d));
-    if (unknown.length) (fields.dependsOn ??= []).push(`${unknown.length} of these steps are not in this episode`);
-  }
-  if (toolIds) {
-    const unknown = toolIds.filter((t) => !ctx.channelToolIds.has(t));
-    if (unknown.length) (fields.toolIds ??= []).push(`${unknown.length} of these tools are not on this channel's shelf`);
-  }
-  if (Object.keys(fields).length) throw new AppError("unprocessable:step.links", "Some linked steps or tools do not belong here.", { fields });
-  if (dependsOn && stepId) {
-    const next = ctx.steps.map((s) => (s.id === stepId ? { id: s.id, dependsOn } : { id: s.id, dependsOn: s.dependsOn }));
-    const cycle = findCycle(next);
-    if (cycle) {
-      const name = (id: string) => ctx.steps.find((s) => s.id === id)?.title ?? id;
-      const loop = [...cycle, cycle[0]!].map(name).join(" → ");
-      throw new AppError("conflict:step.cycle", `These dependencies would make a loop: ${loop}. A step cannot wait for itself.`, {
-        fields: { dependsOn: [`would make a loop: ${loop}`] },
-      });
-    }
-  }
-}
-
-/** Presenter and owner edit everything; a producer only durations, waits and crew. */
-export function assertStepPatchAllowed(access: ChannelAccess, patch: StepUpdate) {
-  const keys = Object.keys(patch);
-  const timingOnly = keys.every((k) => (TIMING_FIELDS as readonly string[]).includes(k));
-  assertCan(access, timingOnly ? "build.timing" : "build.edit");
-}
-
 /** `team` is how many people the channel has: hands-on time is counted against it. */
-export async function planView(steps: StepWithLinks[], shelf: Tool[], team: number) {
+export async function planView(steps: StepWithLinks[], shelf: Tool[], team: number): Promise<PlanDto> {
   const toolById = new Map(shelf.map((t) => [t.id, t]));
   const input = steps.map((s) => ({ id: s.id, activeMinutes: s.activeMinutes, waitMinutes: s.waitMinutes, dependsOn: s.dependsOn, status: s.status, crewNeeded: s.crewNeeded }));
   const timing = planTiming(input);
@@ -86,7 +50,7 @@ export async function planView(steps: StepWithLinks[], shelf: Tool[], team: numb
   };
 }
 
-export function toolDto(t: Tool) {
+export function toolDto(t: Tool): ToolDto {
   return {
     id: t.id,
     name: t.name,

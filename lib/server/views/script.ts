@@ -2,9 +2,10 @@ import "server-only";
 import { timeScript, DEFAULT_WPM } from "../../script-timing";
 import { buildChapters } from "../../chapters";
 import { convertFrames, formatTimecode, framesToSeconds, rateOf } from "../../timecode";
-import type { FrameRateId } from "../../frame-rate";
+import { allowsDropFrame, type FrameRateId } from "../../frame-rate";
+import type { ScriptDto, SegmentDto } from "../../schemas/script";
 import type { Episode } from "../../../db/schema";
-import { listSegmentsByEpisode, toSegmentDto, type Segment } from "../../../db/queries/script";
+import { listSegmentsByEpisode, type Segment } from "../../../db/queries/script";
 import { getUserById } from "../../../db/queries/users";
 
 export async function presenterWpm(episode: Episode): Promise<number> {
@@ -12,11 +13,30 @@ export async function presenterWpm(episode: Episode): Promise<number> {
   return (await getUserById({ id: episode.presenterId }))?.readingRateWpm ?? DEFAULT_WPM;
 }
 
+/** A segment as the API shows it (the shape of segmentSchema). */
+export function toSegmentDto(s: Segment): SegmentDto {
+  return {
+    id: s.id,
+    position: s.position,
+    kind: s.kind,
+    text: s.text,
+    stepId: s.stepId,
+    pinnedStartFrame: s.pinnedStartFrame,
+    explicitDurationFrames: s.explicitDurationFrames,
+    editorNotes: s.editorNotes,
+    chapterStart: s.chapterStart,
+    chapterTitle: s.chapterTitle,
+    version: s.version,
+    updatedBy: s.updatedBy,
+    updatedAt: s.updatedAt.toISOString(),
+  };
+}
+
 /** Segments with their computed timing, totals and chapters at a rate (the episode's unless asked). */
-export function scriptView(episode: Episode, segments: Segment[], wpm: number, override?: { rate?: FrameRateId; dropFrame?: boolean }) {
+export function scriptView(episode: Episode, segments: Segment[], wpm: number, override?: { rate?: FrameRateId; dropFrame?: boolean }): ScriptDto {
   const rateId = override?.rate ?? episode.frameRate;
   const dropFrame = override?.rate ? Boolean(override.dropFrame) : override?.dropFrame ?? episode.dropFrame;
-  const rate = rateOf(rateId, dropFrame && (rateId === "29.97" || rateId === "59.94"));
+  const rate = rateOf(rateId, dropFrame && allowsDropFrame(rateId));
   // Pins and fixed lengths are stored in frames at the episode's rate; viewed at another rate they keep their time.
   const stored = rateOf(episode.frameRate, episode.dropFrame);
   const at = (f: number | null) => (f == null ? null : convertFrames(f, stored, rate));

@@ -1,7 +1,9 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { clipUpdateSchema } from "@/lib/schemas/footage";
-import { deleteClipRow, shotInEpisode, toClipDto, updateClip } from "@/db/queries/footage";
+import { deleteClipRow, shotInEpisode } from "@/db/queries/footage";
+import { toClipDto } from "@/lib/server/views/shots";
+import { updateClip } from "@/lib/server/services/footage";
 import { abortUpload, deleteObject } from "@/storage/multipart";
 import { presignGet } from "@/storage/presign";
 import { AppError } from "@/lib/server/http/errors";
@@ -21,7 +23,7 @@ export const PATCH = channelRoute({ load: "clip", action: "footage.manage", body
   const inF = patch.inFrame !== undefined ? patch.inFrame : clip.inFrame;
   const outF = patch.outFrame !== undefined ? patch.outFrame : clip.outFrame;
   if (inF != null && outF != null && outF <= inF) throw new AppError("unprocessable:clip.range", "The out point must come after the in point.", { fields: { outFrame: ["must be after the in point"] } });
-  const row = await updateClip({ id: clip.id, patch });
+  const row = await updateClip({ clip, patch });
   return json({ clip: toClipDto(row!) });
 });
 

@@ -3,7 +3,8 @@ import { json } from "@/lib/server/http/api";
 import { publicRoute } from "@/lib/server/http/route-builder";
 import { AppError } from "@/lib/server/http/errors";
 import { invitationAcceptSchema } from "@/lib/schemas/account";
-import { acceptInvitation, getOpenInvitationByTokenHash } from "@/db/queries/auth";
+import { getOpenInvitationByTokenHash } from "@/db/queries/auth";
+import { acceptInvitation } from "@/lib/server/services/accounts";
 import { getUserByEmail } from "@/db/queries/users";
 import { hashToken } from "@/lib/server/infra/tokens";
 

@@ -1,7 +1,8 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { materialUpdateSchema } from "@/lib/schemas/build";
-import { deleteMaterial, stepIdsOfEpisode, updateMaterial } from "@/db/queries/materials";
+import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { deleteMaterial, updateMaterial } from "@/lib/server/services/materials";
 import { materialsView } from "@/lib/server/views/materials";
 import { AppError } from "@/lib/server/http/errors";
 

@@ -3,7 +3,7 @@ import { json } from "@/lib/server/http/api";
 import { publicRoute } from "@/lib/server/http/route-builder";
 import { AppError } from "@/lib/server/http/errors";
 import { resetConfirmSchema } from "@/lib/schemas/account";
-import { consumePasswordReset } from "@/db/queries/auth";
+import { consumePasswordReset } from "@/lib/server/services/accounts";
 import { hashToken } from "@/lib/server/infra/tokens";
 
 /** Public: the token in the e-mailed link is the credential. */

@@ -2,7 +2,8 @@ import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { assertCan } from "@/lib/server/access/access";
 import { ANNOTATION_FIELDS, segmentSaveSchema } from "@/lib/schemas/script";
-import { deleteSegment, saveSegment, toSegmentDto } from "@/db/queries/script";
+import { deleteSegment, saveSegment } from "@/lib/server/services/script";
+import { toSegmentDto } from "@/lib/server/views/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { AppError } from "@/lib/server/http/errors";
 

@@ -1,7 +1,9 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { shotUpdateSchema } from "@/lib/schemas/footage";
-import { deleteShot, linksBelong, toShotDto, updateShot } from "@/db/queries/shots";
+import { linksBelong } from "@/db/queries/shots";
+import { deleteShot, updateShot } from "@/lib/server/services/shots";
+import { toShotDto } from "@/lib/server/views/shots";
 import { AppError } from "@/lib/server/http/errors";
 
 export const PATCH = channelRoute({ load: "shot", action: "shots.edit", body: shotUpdateSchema, what: "shot" }, async ({ shot, body }) => {

@@ -1,7 +1,9 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { episodeCreateSchema, episodeListQuerySchema } from "@/lib/schemas/episode";
-import { createEpisode, listEpisodesByChannel, toEpisodeDto } from "@/db/queries/episodes";
+import { listEpisodesByChannel } from "@/db/queries/episodes";
+import { createEpisode } from "@/lib/server/services/episodes";
+import { toEpisodeDto } from "@/lib/server/views/episode";
 import { recordAudit } from "@/db/queries/audit";
 import { boardFigures } from "@/lib/server/views/board-figures";
 

@@ -2,7 +2,8 @@ import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { completeUpload, listParts, objectSize } from "@/storage/multipart";
 import { readMediaMeta } from "@/storage/media-info";
-import { finishClip, toClipDto } from "@/db/queries/footage";
+import { finishClip } from "@/lib/server/services/footage";
+import { toClipDto } from "@/lib/server/views/shots";
 import { AppError } from "@/lib/server/http/errors";
 
 /**
@@ -35,7 +36,7 @@ export const POST = channelRoute({ load: "clip", action: "footage.manage" }, asy
       return {};
     });
   }
-  const row = await finishClip({ id: clip.id, meta: { ...meta, checksum: etag ? `s3-etag:${etag}` : null } });
+  const row = await finishClip({ clip, meta: { ...meta, checksum: etag ? `s3-etag:${etag}` : null } });
   if (!row) throw new AppError("conflict:clip.stored", "This clip was finished a moment ago.");
   return json({ clip: toClipDto(row) });
 });

@@ -1,7 +1,8 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { materialCreateSchema } from "@/lib/schemas/build";
-import { createMaterials, listMaterialsByEpisode, stepIdsOfEpisode } from "@/db/queries/materials";
+import { listMaterialsByEpisode, stepIdsOfEpisode } from "@/db/queries/materials";
+import { createMaterials } from "@/lib/server/services/materials";
 import { materialsView } from "@/lib/server/views/materials";
 import { AppError } from "@/lib/server/http/errors";
 

@@ -1,6 +1,7 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
-import { restoreEpisode, toEpisodeDto } from "@/db/queries/episodes";
+import { restoreEpisode } from "@/lib/server/services/episodes";
+import { toEpisodeDto } from "@/lib/server/views/episode";
 import { recordAudit } from "@/db/queries/audit";
 import { AppError } from "@/lib/server/http/errors";
 

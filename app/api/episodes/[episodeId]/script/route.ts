@@ -1,7 +1,8 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { segmentCreateSchema } from "@/lib/schemas/script";
-import { createSegment, toSegmentDto } from "@/db/queries/script";
+import { createSegment } from "@/lib/server/services/script";
+import { toSegmentDto } from "@/lib/server/views/script";
 import { stepIdsOfEpisode } from "@/db/queries/materials";
 import { scriptViewFor } from "@/lib/server/views/script";
 import { AppError } from "@/lib/server/http/errors";

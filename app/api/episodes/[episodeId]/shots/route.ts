@@ -1,7 +1,9 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { shotCreateSchema } from "@/lib/schemas/footage";
-import { createShots, linksBelong, listShotsByEpisode, toShotDto } from "@/db/queries/shots";
+import { linksBelong, listShotsByEpisode } from "@/db/queries/shots";
+import { createShots } from "@/lib/server/services/shots";
+import { toShotDto } from "@/lib/server/views/shots";
 import { AppError } from "@/lib/server/http/errors";
 
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {

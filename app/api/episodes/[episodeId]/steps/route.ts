@@ -1,11 +1,11 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { stepCreateSchema } from "@/lib/schemas/build";
-import { createStep, listStepsByEpisode } from "@/db/queries/build";
+import { listStepsByEpisode } from "@/db/queries/build";
 import { listToolsByChannel } from "@/db/queries/tools";
 import { listMembersByChannel } from "@/db/queries/channels";
-import { checkLinks, planView } from "@/lib/server/views/plan";
-import { AppError } from "@/lib/server/http/errors";
+import { planView } from "@/lib/server/views/plan";
+import { addStep } from "@/lib/server/services/build-plan";
 import { recordAudit } from "@/db/queries/audit";
 
 /** The build plan: steps with links, cautions and timing, plus every tool it uses. */
@@ -15,16 +15,7 @@ export const GET = channelRoute({ load: "episode", action: "channel.read" }, asy
 });
 
 export const POST = channelRoute({ load: "episode", action: "build.edit", body: stepCreateSchema, what: "build step" }, async ({ episode, user, body }) => {
-  const input = body;
-  if (input.status === "failed") {
-    throw new AppError("unprocessable:step.status", "Add the step first, then mark it failed with what went wrong.", { fields: { status: ["mark a step failed through its failure form"] } });
-  }
-  const step = await createStep({
-    episodeId: episode.id,
-    channelId: episode.channelId,
-    input,
-    check: (ctx) => checkLinks(ctx, null, input.dependsOn, input.toolIds),
-  });
-  await recordAudit({ channelId: episode.channelId, userId: user.id, action: "create", entity: "build_step", entityId: step.id, after: input });
+  const step = await addStep({ episodeId: episode.id, channelId: episode.channelId, input: body });
+  await recordAudit({ channelId: episode.channelId, userId: user.id, action: "create", entity: "build_step", entityId: step.id, after: body });
   return json({ step: { id: step.id, title: step.title, position: step.position } }, 201);
 });

@@ -4,7 +4,8 @@ import { uploadCreateSchema } from "@/lib/schemas/footage";
 import { env } from "@/lib/env";
 import { newObjectKey } from "@/storage/keys";
 import { createUpload, planParts } from "@/storage/multipart";
-import { createClip, shotInEpisode, toClipDto } from "@/db/queries/footage";
+import { createClip, shotInEpisode } from "@/db/queries/footage";
+import { toClipDto } from "@/lib/server/views/shots";
 import { AppError } from "@/lib/server/http/errors";
 
 /**

@@ -1,6 +1,7 @@
 import { json } from "@/lib/server/http/api";
 import { channelRoute } from "@/lib/server/http/route-builder";
-import { restoreRevision, toSegmentDto } from "@/db/queries/script";
+import { restoreRevision } from "@/lib/server/services/script";
+import { toSegmentDto } from "@/lib/server/views/script";
 import { AppError } from "@/lib/server/http/errors";
 
 /** Puts the segment back as it was at this revision (a new version; history is kept). */

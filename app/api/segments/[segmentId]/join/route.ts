@@ -1,7 +1,8 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { segmentJoinSchema } from "@/lib/schemas/script";
-import { joinWithNext, toSegmentDto } from "@/db/queries/script";
+import { joinWithNext } from "@/lib/server/services/script";
+import { toSegmentDto } from "@/lib/server/views/script";
 import { AppError } from "@/lib/server/http/errors";
 
 /** Joins the next segment onto this one; both versions must be the ones the writer saw. */

@@ -1,7 +1,8 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { segmentSplitSchema } from "@/lib/schemas/script";
-import { splitSegment, toSegmentDto } from "@/db/queries/script";
+import { splitSegment } from "@/lib/server/services/script";
+import { toSegmentDto } from "@/lib/server/views/script";
 import { AppError } from "@/lib/server/http/errors";
 
 /** Splits a segment in two at the writer's cursor: this one keeps `before`, a new one after it gets `after`. */

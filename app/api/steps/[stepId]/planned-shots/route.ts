@@ -1,6 +1,8 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
-import { createShots, listShotsByEpisode, toShotDto } from "@/db/queries/shots";
+import { listShotsByEpisode } from "@/db/queries/shots";
+import { createShots } from "@/lib/server/services/shots";
+import { toShotDto } from "@/lib/server/views/shots";
 import { COVERAGE_LABELS, type CoverageKind } from "@/lib/shot-kinds";
 import { AppError } from "@/lib/server/http/errors";
 import type { ShotKind } from "@/lib/schemas/footage";

@@ -1,5 +1,5 @@
 import { episodePage } from "@/lib/server/access/episode-page";
-import { toEpisodeDto } from "@/db/queries/episodes";
+import { toEpisodeDto } from "@/lib/server/views/episode";
 import { EpisodeEditor } from "@/components/episode-editor";
 import { can } from "@/lib/permissions";
 

@@ -2,7 +2,7 @@ import { channelRoute } from "@/lib/server/http/route-builder";
 import { json, parseId } from "@/lib/server/http/api";
 import { AppError } from "@/lib/server/http/errors";
 import { memberRolesSchema } from "@/lib/schemas/account";
-import { updateMemberRoles } from "@/db/queries/channels";
+import { updateMemberRoles } from "@/lib/server/services/accounts";
 import { recordAudit } from "@/db/queries/audit";
 
 export const PATCH = channelRoute({ load: "channel", action: "members.manage", body: memberRolesSchema, what: "member roles" }, async ({ channelId, user, params, body }) => {

@@ -1,7 +1,9 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { materialCreateSchema, type MaterialCreate } from "@/lib/schemas/build";
-import { createMaterials, listMaterialsByEpisode, stepIdsOfEpisode, toMaterialInput } from "@/db/queries/materials";
+import { listMaterialsByEpisode, stepIdsOfEpisode } from "@/db/queries/materials";
+import { createMaterials } from "@/lib/server/services/materials";
+import { toMaterialInput } from "@/lib/server/views/materials";
 import { parseCsv, recordToBody, toCsv } from "@/lib/cut-list-csv";
 import { AppError } from "@/lib/server/http/errors";
 import { fileSlug } from "@/lib/file-name";

@@ -1,7 +1,7 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { shotBulkSchema } from "@/lib/schemas/footage";
-import { setShotStatus } from "@/db/queries/shots";
+import { setShotStatus } from "@/lib/server/services/shots";
 import { AppError } from "@/lib/server/http/errors";
 
 /** One status for many shots, all or none. */
