@@ -1,4 +1,5 @@
 "use client";
+import type { ChannelSettingsDto } from "@/lib/schemas/account";
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { TextField, SelectField, Notice } from "@/components/ui/field";
@@ -13,13 +14,7 @@ const LABELS: Record<string, string> = {
   toCameraMaxMs: "To camera without a cutaway",
 };
 
-interface Settings {
-  name: string;
-  units: "imperial" | "metric";
-  currency: string;
-  brollGapMs: number;
-  toCameraMaxMs: number;
-}
+type Settings = Omit<ChannelSettingsDto, "id">;
 
 export function ChannelSettings({ channelId, initial, canEdit }: { channelId: string; initial: Settings; canEdit: boolean }) {
   const router = useRouter();

@@ -10,20 +10,10 @@ import { TextField, Notice } from "./ui/field";
 import { Button } from "./ui/button";
 import { CheckboxLabel } from "./ui/checkbox";
 import { send } from "@/components/fetch-json";
+import type { InvitationDto, MemberDto } from "@/lib/schemas/account";
 
-interface Member {
-  userId: string;
-  name: string;
-  email: string;
-  roles: Role[];
-}
-interface Invite {
-  id: string;
-  email: string;
-  roles: Role[];
-  expiresAt: string;
-}
-
+type Member = Omit<MemberDto, "joinedAt">;
+type Invite = InvitationDto;
 
 function RoleBoxes({ value, onChange, name }: { value: Role[]; onChange: (r: Role[]) => void; name: string }) {
   return (

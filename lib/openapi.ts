@@ -6,7 +6,7 @@
 import { z } from "zod";
 import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
-import { channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, memberRolesSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
+import { channelSchema, channelSettingsSchema, channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, invitationSchema, mailSchema, memberRolesSchema, memberSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
 import { cutListSchema, materialCreateSchema, materialSchema, materialUpdateSchema, photoUploadSchema, planSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolSchema, toolUpdateSchema } from "./schemas/build";
 import { chaptersSchema, exportQuerySchema, rateSchema, readingRateSchema, scriptSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSchema, segmentSplitSchema, segmentTimingSchema, timingQuerySchema, totalsSchema } from "./schemas/script";
@@ -27,11 +27,6 @@ interface RouteDoc {
   errors: number[];
 }
 
-const channelSchema = z.object({ id: z.string(), name: z.string(), roles: z.array(z.enum(ROLES)), units: z.string(), currency: z.string() });
-const channelSettingsSchema = z.object({ id: z.string(), name: z.string(), units: z.enum(["imperial", "metric"]), currency: z.string(), brollGapMs: z.number(), toCameraMaxMs: z.number() }).meta({ id: "ChannelSettings" });
-const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), joinedAt: z.string() });
-const invitationSchema = z.object({ id: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), expiresAt: z.string() });
-const mailSchema = z.object({ id: z.string(), fromAddress: z.string(), toAddresses: z.array(z.string()), subject: z.string(), textBody: z.string(), receivedAt: z.string() });
 
 const conflictNote = "409 answers error.current with the stored segment";
 export const ROUTES: RouteDoc[] = [

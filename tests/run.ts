@@ -139,7 +139,8 @@ async function main() {
     if (vitestSuites.length) {
       const out = path.join(artifacts, "vitest.json");
       fs.rmSync(out, { force: true });
-      const dirs = vitestSuites.map((s) => `tests/${s}`);
+      // Extra arguments name test files when only vitest suites run (e.g. `integration response-shapes`).
+      const dirs = playwrightArgs.length && !want("e2e") ? playwrightArgs : vitestSuites.map((s) => `tests/${s}`);
       await run(process.execPath, [path.join(root, "node_modules", "vitest", "vitest.mjs"), "run", ...dirs, "--reporter=default", "--reporter=json", `--outputFile.json=${out}`], env);
       const c = countVitest(out);
       console.log(`[test] vitest: ${c.passed} passed, ${c.failed} failed`);

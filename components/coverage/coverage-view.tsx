@@ -8,19 +8,9 @@ import { packLanes, type GapView } from "@/lib/coverage";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
 import { send } from "@/components/fetch-json";
+import type { CoverageDto } from "@/lib/schemas/footage";
 
 type Gap = GapView;
-interface CoverageDto {
-  rate: { id: string; dropFrame: boolean; num: number; den: number };
-  totalFrames: number;
-  segments: { id: string; kind: SegmentKind; text: string; start: number; end: number; startTimecode: string; endTimecode: string }[];
-  gaps: Gap[];
-  openGaps: number;
-  coverage: number;
-  voiceOverFrames: number;
-  ranges: { id: string; clipId: string | null; startFrame: number; endFrame: number; startTimecode: string; endTimecode: string; note: string }[];
-}
-
 const KIND_FILL: Record<SegmentKind, string> = { to_camera: "#54402f", voice_over: "#b89a6a", sponsor_read: "#7a5a86", on_screen_text: "#e8d9bd" };
 
 

@@ -8,34 +8,10 @@ import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
 import { InlineEdit } from "@/components/ui/inline-edit";
 import { Notice } from "@/components/ui/field";
-import { api } from "@/components/plan/types";
-import { ApiError, fetchJson } from "@/components/fetch-json";
+import { ApiError, fetchJson, fetchJson as api } from "@/components/fetch-json";
+import type { CutListDto, MaterialDto } from "@/lib/schemas/build";
 
-interface Row {
-  id: string;
-  partName: string;
-  material: string;
-  unit: "in" | "mm";
-  thickness: number;
-  width: number;
-  length: number;
-  quantity: number;
-  sizing: "nominal" | "actual";
-  pricingUnit: PricingUnit;
-  unitPriceMinor: number;
-  currency: string;
-  wastePercent: number;
-  stepId: string | null;
-  supplierNote: string;
-  figures: { boardFeet: number; cubicMetres: number; sheets: number; linearFeet: number; costMinor: number };
-}
-interface CutListDto {
-  rows: Row[];
-  totals: {
-    byMaterial: { material: string; boardFeet: number; cubicMetres: number; sheetsToBuy: number; costMinor: number; rows: number }[];
-    total: { boardFeet: number; cubicMetres: number; sheetsToBuy: number; costMinor: number; rows: number };
-  };
-}
+type Row = MaterialDto;
 
 function dim(v: number, unit: "in" | "mm") {
   return unit === "in" ? `${formatInches(v)} in` : `${Number(v.toFixed(1))} mm`;

@@ -7,21 +7,7 @@ import { formatBytes, MEDIA_TYPES } from "@/lib/schemas/footage";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
 import { Upload, type UploadState } from "./upload-engine";
-
-export interface ClipDto {
-  id: string;
-  shotId: string | null;
-  state: string;
-  originalName: string;
-  sizeBytes: number;
-  contentType: string;
-  durationMs: number | null;
-  frameRate: string | null;
-  width: number | null;
-  height: number | null;
-  startTimecode: string | null;
-  checksum: string | null;
-}
+import type { ClipDto } from "@/lib/schemas/footage";
 
 function clock(s: number | null) {
   if (s == null || !Number.isFinite(s)) return "—";

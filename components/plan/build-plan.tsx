@@ -13,7 +13,8 @@ import { Caution } from "@/components/caution";
 import { PlanTimeline } from "./plan-timeline";
 import { StepForm, type StepBody } from "./step-form";
 import { FailureForm } from "./failure-form";
-import { api, type PlanDto, type PlanStepDto, type ToolDto } from "./types";
+import { fetchJson as api } from "@/components/fetch-json";
+import type { PlanDto, PlanStepDto, ToolDto } from "@/lib/schemas/build";
 
 type Result = { ok: true } | { ok: false; message: string; fields?: Record<string, string[]> };
 

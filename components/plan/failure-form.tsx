@@ -2,7 +2,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
-import { api } from "./types";
+import { fetchJson as api } from "@/components/fetch-json";
 
 /** Asks what went wrong, uploads an optional photo straight to storage, then marks the step failed. */
 export function FailureForm({ episodeId, stepId, onDone, onCancel }: { episodeId: string; stepId: string; onDone: () => void; onCancel: () => void }) {

@@ -8,7 +8,7 @@ import { CAUTIONS, HAZARDS } from "@/lib/safety";
 import { TextField, Notice, SelectField } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { Checkbox } from "@/components/ui/checkbox";
-import type { PlanStepDto, ToolDto } from "./types";
+import type { PlanStepDto, ToolDto } from "@/lib/schemas/build";
 
 const WAIT_UNITS = { minutes: 1, hours: 60, days: 1440 } as const;
 type WaitUnit = keyof typeof WAIT_UNITS;

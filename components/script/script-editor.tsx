@@ -10,7 +10,11 @@ import { formatDuration, formatTimecode, framesToSeconds, type Rate } from "@/li
 import { Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { SegmentEditor, type SaveState, type SegmentHandle } from "./segment-editor";
-import { send, SaveError, type ScriptDto, type SegmentDto } from "./types";
+import { ApiError as SaveError, send } from "@/components/fetch-json";
+import type { ScriptDto, SegmentDto } from "@/lib/schemas/script";
+
+/** The script as the editor keeps it: the server's timing is not kept, the editor times every keystroke itself. */
+type ScriptData = Pick<ScriptDto, "rate" | "wordsPerMinute"> & { segments: SegmentDto[] };
 
 interface Props {
   episodeId: string;
@@ -35,7 +39,7 @@ function signedSeconds(frames: number, rate: Rate) {
 export function ScriptEditor(p: Props) {
   const qc = useQueryClient();
   const key = useMemo(() => ["script", p.episodeId], [p.episodeId]);
-  const { data, error } = useQuery({ queryKey: key, queryFn: () => send<ScriptDto>(`/api/episodes/${p.episodeId}/script`, "GET"), refetchOnWindowFocus: false });
+  const { data, error } = useQuery({ queryKey: key, queryFn: () => send<ScriptData>(`/api/episodes/${p.episodeId}/script`, "GET"), refetchOnWindowFocus: false });
   const [drafts, setDrafts] = useState<Record<string, string>>({});
   const [states, setStates] = useState<Record<string, SaveState>>({});
   const [message, setMessage] = useState<{ tone: "ok" | "error" | "info"; text: string } | null>(null);
@@ -133,8 +137,8 @@ export function ScriptEditor(p: Props) {
   }
 
   async function reorder(ids: string[], label: string) {
-    const previous = qc.getQueryData<ScriptDto>(key);
-    if (previous) qc.setQueryData<ScriptDto>(key, { ...previous, segments: ids.map((id) => previous.segments.find((s) => s.id === id)!) });
+    const previous = qc.getQueryData<ScriptData>(key);
+    if (previous) qc.setQueryData<ScriptData>(key, { ...previous, segments: ids.map((id) => previous.segments.find((s) => s.id === id)!) });
     try {
       await send(`/api/episodes/${p.episodeId}/script/order`, "PUT", { ids });
       setAnnounce(label);
@@ -253,7 +257,7 @@ export function ScriptEditor(p: Props) {
                 chapterProblems={problemsFor(s.id)}
                 onDraft={(id, text) => setDrafts((d) => ({ ...d, [id]: text }))}
                 onSaved={(seg) => {
-                  qc.setQueryData<ScriptDto>(key, (old) => (old ? { ...old, segments: old.segments.map((x) => (x.id === seg.id ? seg : x)) } : old));
+                  qc.setQueryData<ScriptData>(key, (old) => (old ? { ...old, segments: old.segments.map((x) => (x.id === seg.id ? seg : x)) } : old));
                 }}
                 onState={(id, st) => setStates((m) => ({ ...m, [id]: st }))}
                 onSplit={split}

@@ -6,7 +6,8 @@ import { CSS } from "@dnd-kit/utilities";
 import { SEGMENT_KINDS, SEGMENT_KIND_LABELS, type TimedSegment } from "@/lib/script-timing";
 import { formatTimecode, framesToSeconds, msToFrames, parseTimecode, type Rate } from "@/lib/timecode";
 import { proposeMerge } from "./merge";
-import { SaveError, send, type SegmentDto } from "./types";
+import { ApiError as SaveError, send } from "@/components/fetch-json";
+import type { SegmentDto } from "@/lib/schemas/script";
 
 export type SaveState = "saved" | "pending" | "saving" | "offline" | "conflict";
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useCallback, useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type RowSelectionState, type SortingState } from "@tanstack/react-table";
-import { SHOT_KINDS, SHOT_KIND_LABELS, SHOT_STATUSES, SHOT_STATUS_LABELS, type ShotKind, type ShotStatus } from "@/lib/schemas/footage";
+import { SHOT_KINDS, SHOT_KIND_LABELS, SHOT_STATUSES, SHOT_STATUS_LABELS, type ShotDto, type ShotKind, type ShotStatus } from "@/lib/schemas/footage";
 import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
 import { InlineEdit } from "@/components/ui/inline-edit";
@@ -11,19 +11,7 @@ import { Notice } from "@/components/ui/field";
 import { Checkbox } from "@/components/ui/checkbox";
 import { send } from "@/components/fetch-json";
 
-interface Shot {
-  id: string;
-  kind: ShotKind;
-  description: string;
-  framing: string;
-  cameraNotes: string;
-  priority: number;
-  status: ShotStatus;
-  stepId: string | null;
-  segmentId: string | null;
-  gapId: string | null;
-}
-
+type Shot = ShotDto;
 
 const col = createColumnHelper<Shot>();
 

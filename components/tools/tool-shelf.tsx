@@ -8,7 +8,8 @@ import { toolCreateSchema, ACQUISITIONS, ACQUISITION_LABELS, type Acquisition } 
 import { TOOL_KINDS, TOOL_KIND_LABELS, type ToolKind } from "@/lib/safety";
 import { TextField, SelectField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
-import { api, type ToolDto } from "@/components/plan/types";
+import { fetchJson as api } from "@/components/fetch-json";
+import type { ToolDto } from "@/lib/schemas/build";
 
 type Form = z.input<typeof toolCreateSchema>;
 

@@ -47,3 +47,16 @@ export const channelUpdateSchema = z
   .strict()
   .refine((v) => Object.keys(v).length > 0, { message: "send at least one field to change" })
   .meta({ id: "ChannelUpdate" });
+
+// ---- Responses: one schema per resource, used by the handlers (typed), the OpenAPI document and the browser.
+
+export const channelSchema = z.object({ id: z.string(), name: z.string(), roles: z.array(z.enum(ROLES)), units: z.string(), currency: z.string() });
+export type ChannelDto = z.infer<typeof channelSchema>;
+export const channelSettingsSchema = z.object({ id: z.string(), name: z.string(), units: z.enum(["imperial", "metric"]), currency: z.string(), brollGapMs: z.number(), toCameraMaxMs: z.number() }).meta({ id: "ChannelSettings" });
+export type ChannelSettingsDto = z.infer<typeof channelSettingsSchema>;
+export const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), joinedAt: z.string() });
+export type MemberDto = z.infer<typeof memberSchema>;
+export const invitationSchema = z.object({ id: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), expiresAt: z.string(), createdAt: z.string().optional() });
+export type InvitationDto = z.infer<typeof invitationSchema>;
+export const mailSchema = z.object({ id: z.string(), fromAddress: z.string(), toAddresses: z.array(z.string()), subject: z.string(), textBody: z.string(), receivedAt: z.string() });
+export type MailDto = z.infer<typeof mailSchema>;

@@ -55,7 +55,7 @@ export function scriptView(episode: Episode, segments: Segment[], wpm: number, o
     rate: { id: rateId, dropFrame: rate.dropFrame, num: rate.num, den: rate.den },
     wordsPerMinute: wpm,
     segments: segments.map((s, i) => {
-      const t = timing.segments[i]!;
+      const { id: _id, kind: _kind, stepId: _step, ...t } = timing.segments[i]!;
       return { ...toSegmentDto(s), timing: { ...t, startTimecode: tc(t.start), endTimecode: tc(t.end), durationSeconds: framesToSeconds(t.duration, rate) } };
     }),
     totals: {
