@@ -4,13 +4,12 @@ import { useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { parseTimecode, rulerTicks, type Rate } from "@/lib/timecode";
 import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
-import { packLanes, type GapView } from "@/lib/coverage";
+import { packLanes } from "@/lib/coverage";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
 import { send } from "@/components/fetch-json";
 import type { CoverageDto } from "@/lib/schemas/footage";
 
-type Gap = GapView;
 const KIND_FILL: Record<SegmentKind, string> = { to_camera: "#54402f", voice_over: "#b89a6a", sponsor_read: "#7a5a86", on_screen_text: "#e8d9bd" };
 
 

@@ -3,7 +3,7 @@ import { useCallback, useMemo, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import { formatInches, parseMeasure } from "@/lib/fraction";
-import { MM_PER_INCH, PRICING_LABELS, PRICING_UNITS, formatMoney, type PricingUnit } from "@/lib/materials";
+import { MM_PER_INCH, PRICING_LABELS, PRICING_UNITS, formatMoney } from "@/lib/materials";
 import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
 import { InlineEdit } from "@/components/ui/inline-edit";
