@@ -25,8 +25,10 @@ export interface UploadState {
   resumed: boolean;
 }
 
-const CONCURRENCY = 4;
-const MAX_TRIES = 5;
+export const CONCURRENCY = 4;
+export const MAX_TRIES = 5;
+/** Waits before retrying a part: retryBaseMs × 2^attempt. */
+export const RETRY_BASE_MS = 500;
 
 const api = <T>(url: string, method: string, body?: unknown) => send<T>(url, method, body);
 
@@ -46,12 +48,14 @@ export class Upload {
   private urls = new Map<number, string>();
   private samples: { t: number; sent: number }[] = [];
   private stopped = false;
+  private signing: Promise<void> | null = null;
 
   constructor(
     private file: File,
     private episodeId: string,
     private onChange: (s: UploadState) => void,
     private shotId: string | null = null,
+    private retryBaseMs = RETRY_BASE_MS,
   ) {
     this.state = { key: `${file.name}:${file.size}:${file.lastModified}`, name: file.name, size: file.size, status: "preparing", sent: 0, partsDone: 0, partCount: 0, speed: 0, secondsLeft: null, error: null, clipId: null, resumed: false };
   }
@@ -139,13 +143,23 @@ export class Upload {
     this.emit({ status: "done", sent: this.state.size, secondsLeft: 0 });
   }
 
+  /** A part's presigned URL. Parts are signed in batches, and workers share one signing request at a time. */
   private async signed(n: number): Promise<string> {
-    const cached = this.urls.get(n);
-    if (cached) return cached;
-    // Sign a batch ahead to save round trips.
-    const batch = Array.from({ length: 20 }, (_, i) => n + i).filter((p) => p <= this.state.partCount && !this.done.has(p) && !this.urls.has(p));
-    const r = await api<{ urls: { partNumber: number; url: string }[] }>(`/api/clips/${this.state.clipId}/parts`, "POST", { partNumbers: batch });
-    for (const u of r.urls) this.urls.set(u.partNumber, u.url);
+    for (let round = 0; !this.urls.has(n); round++) {
+      if (round > 2) throw new Error(`part ${n} could not be signed`);
+      if (!this.signing) {
+        // Sign a batch ahead to save round trips.
+        const batch = Array.from({ length: 20 }, (_, i) => n + i).filter((p) => p <= this.state.partCount && !this.done.has(p) && !this.urls.has(p));
+        this.signing = api<{ urls: { partNumber: number; url: string }[] }>(`/api/clips/${this.state.clipId}/parts`, "POST", { partNumbers: batch })
+          .then((r) => {
+            for (const u of r.urls) this.urls.set(u.partNumber, u.url);
+          })
+          .finally(() => {
+            this.signing = null;
+          });
+      }
+      await this.signing;
+    }
     return this.urls.get(n)!;
   }
 
@@ -179,7 +193,7 @@ export class Upload {
         if ((e as { status?: number }).status === 403) this.urls.delete(n); // expired signature: sign again
         if (attempt === MAX_TRIES) throw new Error(`part ${n} failed ${MAX_TRIES} times (${(e as Error).message}); press Resume to try again`);
         if (typeof navigator !== "undefined" && !navigator.onLine) await new Promise((r) => window.addEventListener("online", r, { once: true }));
-        await new Promise((r) => setTimeout(r, 500 * 2 ** attempt));
+        await new Promise((r) => setTimeout(r, this.retryBaseMs * 2 ** attempt));
       }
     }
   }

@@ -53,8 +53,8 @@ export function ScriptEditor(p: Props) {
   const refresh = () => qc.invalidateQueries({ queryKey: key });
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }), useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }));
 
-  const segments = data?.segments ?? [];
-  const rate: Rate | null = data ? { num: data.rate.num, den: data.rate.den, dropFrame: data.rate.dropFrame } : null;
+  const segments = useMemo(() => data?.segments ?? [], [data]);
+  const rate: Rate | null = useMemo(() => (data ? { num: data.rate.num, den: data.rate.den, dropFrame: data.rate.dropFrame } : null), [data]);
 
   // Live timing from what is on screen, drafts included (the same pure module the server uses).
   const live = useMemo(() => {

@@ -1,15 +1,14 @@
 "use client";
 import { CheckboxLabel } from "@/components/ui/checkbox";
-import { forwardRef, useCallback, useEffect, useImperativeHandle, useRef, useState } from "react";
+import { forwardRef, useEffect, useImperativeHandle, useRef, useState } from "react";
 import { useSortable } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
 import { SEGMENT_KINDS, SEGMENT_KIND_LABELS, type TimedSegment } from "@/lib/script-timing";
 import { formatTimecode, framesToSeconds, msToFrames, parseTimecode, type Rate } from "@/lib/timecode";
-import { proposeMerge } from "./merge";
-import { ApiError as SaveError, send } from "@/components/fetch-json";
+import { useSegmentAutosave, type SaveState } from "./use-segment-autosave";
 import type { SegmentDto } from "@/lib/schemas/script";
 
-export type SaveState = "saved" | "pending" | "saving" | "offline" | "conflict";
+export type { SaveState };
 
 export interface SegmentHandle {
   /** Saves any pending text now; resolves to the stored segment or null when it could not be saved. */
@@ -36,102 +35,30 @@ interface Props {
   onDelete: (id: string) => void;
 }
 
-const DEBOUNCE_MS = 700;
-
 function secs(frames: number, rate: Rate) {
   return framesToSeconds(frames, rate).toFixed(1);
 }
 
 export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEditor(props, ref) {
   const { segment, index, timing, rate, steps, canWrite, canAnnotate, chapterProblems } = props;
-  const [base, setBase] = useState(segment);
-  const [text, setText] = useState(segment.text);
-  const [state, setState] = useState<SaveState>("saved");
-  const [conflict, setConflict] = useState<{ theirs: SegmentDto; mine: string; merged: string } | null>(null);
-  const [fieldError, setFieldError] = useState<string | null>(null);
+  const { onDraft, onSaved, onState } = props;
+  const autosave = useSegmentAutosave(segment, {
+    onDraft: (t) => onDraft(segment.id, t),
+    onSaved,
+    onState: (st) => onState(segment.id, st),
+  });
+  const { base, text, state, conflict, fieldError, setFieldError, save, flush: flushText } = autosave;
   const [pinText, setPinText] = useState(segment.pinnedStartFrame != null ? formatTimecode(segment.pinnedStartFrame, rate) : "");
-  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
-  const conflictRef = useRef<typeof conflict>(null);
-  const inflight = useRef<Promise<SegmentDto | null> | null>(null);
-  const textRef = useRef(text);
-  const baseRef = useRef(base);
   const area = useRef<HTMLTextAreaElement>(null);
-  textRef.current = text;
-  baseRef.current = base;
+  const seenVersion = useRef(segment.version);
 
-  // A newer stored version arrives (someone else, or a structural change): adopt it unless we hold unsaved words.
+  // A newer stored version arrives (someone else, or a structural change): its pin shows.
   useEffect(() => {
-    if (segment.version > baseRef.current.version) {
-      const dirty = textRef.current !== baseRef.current.text;
-      setBase(segment);
-      if (!dirty) setText(segment.text);
+    if (segment.version > seenVersion.current) {
+      seenVersion.current = segment.version;
       setPinText(segment.pinnedStartFrame != null ? formatTimecode(segment.pinnedStartFrame, rate) : "");
     }
   }, [segment, rate]);
-
-  const report = useCallback(
-    (s: SaveState) => {
-      setState(s);
-      props.onState(segment.id, s);
-    },
-    [segment.id],
-  );
-
-  // Saves of one segment go out one at a time, each based on the newest stored version,
-  // so an autosave and a pin change never race each other into a conflict.
-  const chain = useRef<Promise<unknown>>(Promise.resolve());
-  const save = useCallback(
-    (fields: Partial<SegmentDto>): Promise<SegmentDto | null> => {
-      const run = chain.current.then(async (): Promise<SegmentDto | null> => {
-        if (conflictRef.current) return null;
-        const version = baseRef.current.version;
-        report("saving");
-        try {
-          const { segment: stored } = await send<{ segment: SegmentDto }>(`/api/segments/${segment.id}`, "PATCH", { version, ...fields });
-          setBase(stored);
-          baseRef.current = stored;
-          props.onSaved(stored);
-          setFieldError(null);
-          report(textRef.current === stored.text ? "saved" : "pending");
-          return stored;
-        } catch (e) {
-          const err = e as SaveError;
-          if (err.status === 409 && err.current) {
-            const theirs = err.current as SegmentDto;
-            const c = { theirs, mine: textRef.current, merged: proposeMerge(baseRef.current.text, textRef.current, theirs.text).text };
-            conflictRef.current = c;
-            setConflict(c);
-            report("conflict");
-          } else if (err.status === 0) {
-            report("offline");
-            timer.current = setTimeout(() => void flushText(), 3000);
-          } else {
-            setFieldError(err.fields ? Object.values(err.fields).flat().join("; ") : err.message);
-            report("pending");
-          }
-          return null;
-        }
-      });
-      chain.current = run.catch(() => null);
-      return run;
-    },
-    [segment.id],
-  );
-
-  const flushText = useCallback(async (): Promise<SegmentDto | null> => {
-    if (timer.current) clearTimeout(timer.current);
-    timer.current = null;
-    if (inflight.current) await inflight.current;
-    if (conflictRef.current) return null;
-    if (textRef.current === baseRef.current.text) return baseRef.current;
-    const p = save({ text: textRef.current });
-    inflight.current = p;
-    const r = await p;
-    inflight.current = null;
-    // Words typed while that save was on its way go out next.
-    if (r && textRef.current !== r.text) return flushText();
-    return r;
-  }, [save]);
 
   useImperativeHandle(ref, () => ({
     flush: flushText,
@@ -144,27 +71,14 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
     },
   }));
 
-  useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
-
   function onChange(v: string) {
-    setText(v);
-    props.onDraft(segment.id, v);
-    report("pending");
-    if (timer.current) clearTimeout(timer.current);
-    timer.current = setTimeout(() => void flushText(), DEBOUNCE_MS);
+    autosave.change(v);
   }
 
   async function resolve(textToSave: string) {
     if (!conflict) return;
-    baseRef.current = conflict.theirs;
-    setBase(conflict.theirs);
-    setConflict(null);
-    conflictRef.current = null;
     setPinText(conflict.theirs.pinnedStartFrame != null ? formatTimecode(conflict.theirs.pinnedStartFrame, rate) : "");
-    setText(textToSave);
-    textRef.current = textToSave;
-    props.onDraft(segment.id, textToSave);
-    await save({ text: textToSave });
+    await autosave.resolve(textToSave);
   }
 
   const { attributes, listeners, setNodeRef, transform, transition } = useSortable({ id: segment.id, disabled: !canWrite });
@@ -321,7 +235,7 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
             <label className="block text-xs font-bold" htmlFor={`merge-${segment.id}`}>
               Merged text
             </label>
-            <textarea id={`merge-${segment.id}`} className="w-full rounded-plank border border-timber-300 bg-white p-1" rows={4} value={conflict.merged} onChange={(e) => setConflict({ ...conflict, merged: e.target.value })} />
+            <textarea id={`merge-${segment.id}`} className="w-full rounded-plank border border-timber-300 bg-white p-1" rows={4} value={conflict.merged} onChange={(e) => autosave.editMerged(e.target.value)} />
             <div className="flex flex-wrap gap-2">
               <button type="button" className="rounded-plank border border-chalk-700 bg-chalk-600 px-2 py-1 text-white" onClick={() => void resolve(conflict.merged)}>
                 Save merged text
