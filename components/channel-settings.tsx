@@ -4,7 +4,8 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { TextField, SelectField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
-import { ApiError, send } from "@/components/fetch-json";
+import { ApiError } from "@/components/fetch-json";
+import { useWrite } from "@/components/use-write";
 
 const LABELS: Record<string, string> = {
   name: "Channel name",
@@ -17,6 +18,7 @@ const LABELS: Record<string, string> = {
 type Settings = Omit<ChannelSettingsDto, "id">;
 
 export function ChannelSettings({ channelId, initial, canEdit }: { channelId: string; initial: Settings; canEdit: boolean }) {
+  const write = useWrite({ scope: `channel:${channelId}` });
   const router = useRouter();
   const [f, setF] = useState({ ...initial, broll: String(initial.brollGapMs / 1000), toCamera: String(initial.toCameraMaxMs / 1000) });
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -47,7 +49,7 @@ export function ChannelSettings({ channelId, initial, canEdit }: { channelId: st
         e.preventDefault();
         const body = { name: f.name, units: f.units, currency: f.currency.toUpperCase(), brollGapMs: Math.round(Number(f.broll) * 1000), toCameraMaxMs: Math.round(Number(f.toCamera) * 1000) };
         try {
-          await send(`/api/channels/${channelId}`, "PATCH", body);
+          await write(`/api/channels/${channelId}`, "PATCH", body);
         } catch (err) {
           const fields = err instanceof ApiError ? (err.fields ?? {}) : {};
           setErrors(fields);

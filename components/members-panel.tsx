@@ -9,8 +9,8 @@ import { ROLES, ROLE_LABELS, type Role } from "@/lib/roles";
 import { TextField, Notice } from "./ui/field";
 import { Button } from "./ui/button";
 import { CheckboxLabel } from "./ui/checkbox";
-import { send } from "@/components/fetch-json";
 import type { InvitationDto, MemberDto } from "@/lib/schemas/account";
+import { useWrite } from "@/components/use-write";
 
 type Member = Omit<MemberDto, "joinedAt">;
 type Invite = InvitationDto;
@@ -27,6 +27,7 @@ function RoleBoxes({ value, onChange, name }: { value: Role[]; onChange: (r: Rol
 }
 
 export function MembersPanel({ channelId, members, invites, manage, selfId }: { channelId: string; members: Member[]; invites: Invite[]; manage: boolean; selfId: string }) {
+  const write = useWrite({ scope: `members:${channelId}` });
   const router = useRouter();
   const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const [draft, setDraft] = useState<Record<string, Role[]>>({});
@@ -64,7 +65,7 @@ export function MembersPanel({ channelId, members, invites, manage, selfId }: { 
                         <Button
                           onClick={async () => {
                             try {
-                              await send(`/api/channels/${channelId}/members/${m.userId}`, "PATCH", { roles });
+                              await write(`/api/channels/${channelId}/members/${m.userId}`, "PATCH", { roles });
                               setMessage({ tone: "ok", text: `Roles of ${m.name} saved; they apply from the next request.` });
                               setDraft((d) => {
                                 const { [m.userId]: _, ...rest } = d;
@@ -99,7 +100,7 @@ export function MembersPanel({ channelId, members, invites, manage, selfId }: { 
             noValidate
             onSubmit={form.handleSubmit(async (v) => {
               try {
-                await send(`/api/channels/${channelId}/invitations`, "POST", v);
+                await write(`/api/channels/${channelId}/invitations`, "POST", v);
                 setMessage({ tone: "ok", text: `Invitation sent to ${v.email}.` });
                 form.reset({ email: "", roles: ["presenter"] });
                 router.refresh();
@@ -129,7 +130,7 @@ export function MembersPanel({ channelId, members, invites, manage, selfId }: { 
                     <Button
                       variant="quiet"
                       onClick={async () => {
-                        await send(`/api/channels/${channelId}/invitations/${i.id}`, "DELETE").catch((e: Error) => setMessage({ tone: "error", text: e.message }));
+                        await write(`/api/channels/${channelId}/invitations/${i.id}`, "DELETE").catch((e: Error) => setMessage({ tone: "error", text: e.message }));
                         router.refresh();
                       }}
                     >

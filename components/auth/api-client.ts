@@ -1,19 +1,31 @@
-import { ApiError, send } from "@/components/fetch-json";
+"use client";
+import { useCallback } from "react";
+import type { ApiError } from "@/components/fetch-json";
+import { useWrite } from "@/components/use-write";
+
+export type PostResult<T> = { ok: true; data: T } | { ok: false; status: number; message: string; fields?: Record<string, string[]> };
 
 /**
- * For the auth forms: the shared API helper, as a result instead of a throw.
- * Sign-in itself speaks next-auth's form protocol, not Jigboard's JSON API.
+ * For the auth forms: a write through the shared mutation path, as a result
+ * instead of a throw. Sign-in itself speaks next-auth's form protocol, not
+ * Jigboard's JSON API.
  */
-export async function postJson<T = unknown>(url: string, body: unknown): Promise<{ ok: true; data: T } | { ok: false; status: number; message: string; fields?: Record<string, string[]> }> {
-  try {
-    return { ok: true, data: await send<T>(url, "POST", body) };
-  } catch (e) {
-    const err = e as ApiError;
-    return { ok: false, status: err.status ?? 0, message: err.message, fields: err.fields };
-  }
+export function usePostJson() {
+  const write = useWrite();
+  return useCallback(
+    async <T = unknown>(url: string, body: unknown): Promise<PostResult<T>> => {
+      try {
+        return { ok: true, data: await write<T>(url, "POST", body) };
+      } catch (e) {
+        const err = e as ApiError;
+        return { ok: false, status: err.status ?? 0, message: err.message, fields: err.fields };
+      }
+    },
+    [write],
+  );
 }
 
-/** Signs in through next-auth's credentials endpoint, surfacing the throttle's 429 message. */
+/** Signs in through next-auth's credentials endpoint (its own form protocol, so a plain fetch), surfacing the throttle's 429 message. */
 export async function signInWithPassword(email: string, password: string): Promise<{ ok: true } | { ok: false; message: string }> {
   const csrf = await fetch("/api/auth/csrf").then((r) => r.json() as Promise<{ csrfToken: string }>);
   const res = await fetch("/api/auth/callback/credentials", {

@@ -6,9 +6,10 @@ import type { z } from "zod";
 import { resetRequestSchema } from "@/lib/schemas/account";
 import { TextField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
-import { postJson } from "./api-client";
+import { usePostJson } from "./api-client";
 
 export function ForgotForm() {
+  const postJson = usePostJson();
   const [sent, setSent] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm<z.input<typeof resetRequestSchema>>({ resolver: zodResolver(resetRequestSchema) });

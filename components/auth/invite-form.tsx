@@ -6,9 +6,10 @@ import type { z } from "zod";
 import { invitationAcceptSchema } from "@/lib/schemas/account";
 import { TextField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
-import { postJson } from "./api-client";
+import { usePostJson } from "./api-client";
 
 export function InviteForm({ token, email, channelName, roles }: { token: string; email: string; channelName: string; roles: string }) {
+  const postJson = usePostJson();
   const [error, setError] = useState<string | null>(null);
   const { register, handleSubmit, formState, setError: setFieldError } = useForm<z.input<typeof invitationAcceptSchema>>({
     resolver: zodResolver(invitationAcceptSchema),

@@ -6,9 +6,10 @@ import type { z } from "zod";
 import { resetConfirmSchema } from "@/lib/schemas/account";
 import { TextField, Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
-import { postJson } from "./api-client";
+import { usePostJson } from "./api-client";
 
 export function ResetForm({ token }: { token: string }) {
+  const postJson = usePostJson();
   const [error, setError] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm<z.input<typeof resetConfirmSchema>>({
     resolver: zodResolver(resetConfirmSchema),

@@ -1,7 +1,7 @@
 "use client";
-import { send } from "@/components/fetch-json";
 import { signOut } from "next-auth/react";
 import { Button } from "@/components/ui/button";
+import { useWrite } from "@/components/use-write";
 
 export function SignOutButton({ variant = "primary" }: { variant?: "primary" | "quiet" }) {
   return (
@@ -13,11 +13,12 @@ export function SignOutButton({ variant = "primary" }: { variant?: "primary" | "
 
 /** Ends every session of the account (every device), then this one. */
 export function SignOutEverywhereButton() {
+  const write = useWrite();
   return (
     <Button
       variant="plain"
       onClick={async () => {
-        await send("/api/me/sessions", "DELETE").catch(() => null);
+        await write("/api/me/sessions", "DELETE").catch(() => null);
         await signOut({ callbackUrl: "/sign-in" });
       }}
     >

@@ -7,8 +7,9 @@ import { SEGMENT_KIND_LABELS, type SegmentKind } from "@/lib/script-timing";
 import { packLanes } from "@/lib/coverage";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
-import { send } from "@/components/fetch-json";
+import { fetchJson } from "@/components/fetch-json";
 import type { CoverageDto } from "@/lib/schemas/footage";
+import { useWrite } from "@/components/use-write";
 
 const KIND_FILL: Record<SegmentKind, string> = { to_camera: "#54402f", voice_over: "#b89a6a", sponsor_read: "#7a5a86", on_screen_text: "#e8d9bd" };
 
@@ -77,9 +78,10 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
 }
 
 export function CoverageView({ episodeId, base, canManage, canShots, clips }: { episodeId: string; base: string; canManage: boolean; canShots: boolean; clips: { id: string; name: string; durationMs: number | null }[] }) {
+  const write = useWrite({ scope: `coverage:${episodeId}` });
   const qc = useQueryClient();
   const key = useMemo(() => ["coverage", episodeId], [episodeId]);
-  const { data } = useQuery({ queryKey: key, queryFn: () => send(`/api/episodes/${episodeId}/coverage`, "GET") as Promise<CoverageDto> });
+  const { data } = useQuery({ queryKey: key, queryFn: () => fetchJson(`/api/episodes/${episodeId}/coverage`) as Promise<CoverageDto> });
   const [focusText, setFocusText] = useState("Move over or tab to a block to read its timecodes.");
   const [msg, setMsg] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const [place, setPlace] = useState({ clipId: "", at: "" });
@@ -146,7 +148,7 @@ export function CoverageView({ episodeId, base, canManage, canShots, clips }: { 
               e.preventDefault();
               const at = tc(place.at);
               if (!at.ok) return setMsg({ tone: "error", text: `Start: ${at.message}` });
-              void act(() => send(`/api/episodes/${episodeId}/coverage-ranges`, "POST", { clipId: place.clipId, startFrame: at.frames }), "Clip placed on the timeline.");
+              void act(() => write(`/api/episodes/${episodeId}/coverage-ranges`, "POST", { clipId: place.clipId, startFrame: at.frames }), "Clip placed on the timeline.");
             }}
           >
             <h2 className="font-bold">Place a clip as B-roll</h2>
@@ -174,8 +176,8 @@ export function CoverageView({ episodeId, base, canManage, canShots, clips }: { 
               void act(
                 () =>
                   mark.as === "broll"
-                    ? send(`/api/episodes/${episodeId}/coverage-ranges`, "POST", { startFrame: a.frames, endFrame: b.frames, note: mark.note })
-                    : send(`/api/episodes/${episodeId}/gaps`, "POST", { startFrame: a.frames, endFrame: b.frames, note: mark.note }),
+                    ? write(`/api/episodes/${episodeId}/coverage-ranges`, "POST", { startFrame: a.frames, endFrame: b.frames, note: mark.note })
+                    : write(`/api/episodes/${episodeId}/gaps`, "POST", { startFrame: a.frames, endFrame: b.frames, note: mark.note }),
                 mark.as === "broll" ? "B-roll range marked." : "Gap marked.",
               );
             }}
@@ -206,7 +208,7 @@ export function CoverageView({ episodeId, base, canManage, canShots, clips }: { 
           {data.gaps.map((g) => {
             const body = { source: "computed", startFrame: g.startFrame, endFrame: g.endFrame, segmentId: g.segmentId, reason: g.reason };
             const setStatus = (status: string) =>
-              act(() => (g.id ? send(`/api/gaps/${g.id}`, "PATCH", { status }) : send(`/api/episodes/${episodeId}/gaps`, "POST", { ...body, status })), `Gap ${status === "open" ? "reopened" : status}.`);
+              act(() => (g.id ? write(`/api/gaps/${g.id}`, "PATCH", { status }) : write(`/api/episodes/${episodeId}/gaps`, "POST", { ...body, status })), `Gap ${status === "open" ? "reopened" : status}.`);
             return (
               <li key={g.key} className="flex flex-wrap items-center gap-2 rounded-plank border border-timber-200 bg-white px-2 py-1" data-testid="gap-item" data-status={g.status}>
                 <span className="num">
@@ -223,7 +225,7 @@ export function CoverageView({ episodeId, base, canManage, canShots, clips }: { 
                         See the pickup shot
                       </Link>
                     ) : canShots ? (
-                      <Button onClick={() => void act(() => send(`/api/episodes/${episodeId}/pickups`, "POST", g.id ? { gapId: g.id } : { startFrame: g.startFrame, endFrame: g.endFrame, segmentId: g.segmentId, reason: g.reason }), "Pickup shot added to the shot list.")}>Pickup shot</Button>
+                      <Button onClick={() => void act(() => write(`/api/episodes/${episodeId}/pickups`, "POST", g.id ? { gapId: g.id } : { startFrame: g.startFrame, endFrame: g.endFrame, segmentId: g.segmentId, reason: g.reason }), "Pickup shot added to the shot list.")}>Pickup shot</Button>
                     ) : null}
                     <Button variant="quiet" onClick={() => void setStatus("resolved")}>
                       Resolve
@@ -252,7 +254,7 @@ export function CoverageView({ episodeId, base, canManage, canShots, clips }: { 
               </span>
               <span className="text-walnut-700">{r.clipId ? (clips.find((c) => c.id === r.clipId)?.name ?? "clip") : `marked${r.note ? `: ${r.note}` : ""}`}</span>
               {canManage ? (
-                <Button variant="quiet" onClick={() => void act(() => send(`/api/coverage-ranges/${r.id}`, "DELETE"), "Range removed.")}>
+                <Button variant="quiet" onClick={() => void act(() => write(`/api/coverage-ranges/${r.id}`, "DELETE"), "Range removed.")}>
                   Remove
                 </Button>
               ) : null}

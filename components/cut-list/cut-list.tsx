@@ -8,8 +8,9 @@ import { Button } from "@/components/ui/button";
 import { TableHead } from "@/components/ui/table-head";
 import { InlineEdit } from "@/components/ui/inline-edit";
 import { Notice } from "@/components/ui/field";
-import { ApiError, fetchJson, fetchJson as api } from "@/components/fetch-json";
+import { ApiError, fetchJson } from "@/components/fetch-json";
 import type { CutListDto, MaterialDto } from "@/lib/schemas/build";
+import { useWrite } from "@/components/use-write";
 
 type Row = MaterialDto;
 
@@ -23,23 +24,24 @@ function other(v: number, unit: "in" | "mm") {
 const col = createColumnHelper<Row>();
 
 export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { episodeId: string; canEdit: boolean; defaultUnit: "in" | "mm"; currency: string; steps: { id: string; title: string }[] }) {
+  const write = useWrite({ scope: `cut-list:${episodeId}` });
   const qc = useQueryClient();
   const key = useMemo(() => ["cut-list", episodeId], [episodeId]);
-  const { data } = useQuery({ queryKey: key, queryFn: () => api<CutListDto>(`/api/episodes/${episodeId}/materials`) });
+  const { data } = useQuery({ queryKey: key, queryFn: () => fetchJson<CutListDto>(`/api/episodes/${episodeId}/materials`) });
   const [sorting, setSorting] = useState<SortingState>([]);
   const [notice, setNotice] = useState<{ tone: "ok" | "error"; text: string; list?: string[] } | null>(null);
   const refresh = useCallback(() => qc.invalidateQueries({ queryKey: key }), [qc, key]);
 
   const patch = useCallback(async (id: string, body: Record<string, unknown>): Promise<string | null> => {
     try {
-      await api(`/api/materials/${id}`, { method: "PATCH", json: body });
+      await write(`/api/materials/${id}`, "PATCH", body);
       await refresh();
       return null;
     } catch (e) {
       const f = (e as { fields?: Record<string, string[]> }).fields;
       return f ? Object.values(f).flat().join("; ") : (e as Error).message;
     }
-  }, [refresh]);
+  }, [refresh, write]);
 
   // Stable columns and data: see the shot list for the render loop that unstable ones cause.
   const columns = useMemo(() => {
@@ -116,7 +118,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
             variant="quiet"
             aria-label={`Delete ${c.row.original.partName}`}
             onClick={async () => {
-              await api(`/api/materials/${c.row.original.id}`, { method: "DELETE" });
+              await write(`/api/materials/${c.row.original.id}`, "DELETE");
               await refresh();
             }}
           >
@@ -125,7 +127,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
         ) : null,
     }),
   ];
-  }, [canEdit, steps, patch, refresh]);
+  }, [canEdit, steps, patch, refresh, write]);
 
   const rows = useMemo(() => data?.rows ?? [], [data]);
   const table = useReactTable({ data: rows, columns, autoResetAll: false, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
@@ -135,7 +137,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
     const text = await file.text();
     let body: { imported: number };
     try {
-      body = await fetchJson(`/api/episodes/${episodeId}/materials/csv`, { method: "POST", headers: { "content-type": "text/csv" }, body: text });
+      body = await write(`/api/episodes/${episodeId}/materials/csv`, "POST", undefined, { body: text, contentType: "text/csv" });
     } catch (e) {
       const err = e as ApiError;
       const list = err.fields ? Object.entries(err.fields).map(([k, v]) => `${k}: ${v.join("; ")}`) : undefined;
@@ -249,6 +251,7 @@ export function CutList({ episodeId, canEdit, defaultUnit, currency, steps }: { 
 }
 
 function AddRow({ episodeId, defaultUnit, currency, steps, onAdded }: { episodeId: string; defaultUnit: "in" | "mm"; currency: string; steps: { id: string; title: string }[]; onAdded: () => Promise<unknown> }) {
+  const write = useWrite({ scope: `cut-list:${episodeId}` });
   const empty = { partName: "", material: "", thickness: "", width: "", length: "", quantity: "1", unit: defaultUnit, sizing: "actual", pricingUnit: "board_foot", price: "", wastePercent: "15", stepId: "" };
   const [f, setF] = useState(empty);
   const [errors, setErrors] = useState<Record<string, string[]>>({});
@@ -269,9 +272,7 @@ function AddRow({ episodeId, defaultUnit, currency, steps, onAdded }: { episodeI
         e.preventDefault();
         setMessage(null);
         try {
-          await api(`/api/episodes/${episodeId}/materials`, {
-            method: "POST",
-            json: {
+          await write(`/api/episodes/${episodeId}/materials`, "POST", {
               partName: f.partName,
               material: f.material,
               unit: f.unit,
@@ -285,7 +286,6 @@ function AddRow({ episodeId, defaultUnit, currency, steps, onAdded }: { episodeI
               currency,
               wastePercent: Number(f.wastePercent),
               stepId: f.stepId || null,
-            },
           });
           setErrors({});
           setF(empty);

@@ -1,12 +1,13 @@
 "use client";
-import { send } from "@/components/fetch-json";
 import { useRef, useState } from "react";
 import { formatTimecode, parseTimecode, type Rate } from "@/lib/timecode";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
+import { useWrite } from "@/components/use-write";
 
 /** Plays a clip with the current timecode at the episode's rate; the editor sets in and out points. */
 export function ClipPlayer({ clipId, url, rate, startTimecode, initialIn, initialOut, canEdit }: { clipId: string; url: string; rate: Rate; startTimecode: string | null; initialIn: number | null; initialOut: number | null; canEdit: boolean }) {
+  const write = useWrite({ scope: `clip:${clipId}` });
   const video = useRef<HTMLVideoElement>(null);
   const [frame, setFrame] = useState(0);
   const [inF, setIn] = useState(initialIn);
@@ -21,7 +22,7 @@ export function ClipPlayer({ clipId, url, rate, startTimecode, initialIn, initia
   async function save(patch: { inFrame?: number | null; outFrame?: number | null }) {
     let body: { clip: { inFrame: number | null; outFrame: number | null } };
     try {
-      body = await send(`/api/clips/${clipId}`, "PATCH", patch);
+      body = await write(`/api/clips/${clipId}`, "PATCH", patch);
     } catch (e) {
       return setMsg({ tone: "error", text: (e as Error).message });
     }

@@ -1,5 +1,5 @@
 "use client";
-import { fetchJson, send } from "@/components/fetch-json";
+import { fetchJson } from "@/components/fetch-json";
 import Link from "next/link";
 import { useRef, useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
@@ -8,6 +8,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
 import { Upload, type UploadState } from "./upload-engine";
 import type { ClipDto } from "@/lib/schemas/footage";
+import { useWrite } from "@/components/use-write";
 
 function clock(s: number | null) {
   if (s == null || !Number.isFinite(s)) return "—";
@@ -24,6 +25,7 @@ function Bar({ value, label }: { value: number; label: string }) {
 }
 
 export function FootagePanel({ episodeId, channelBase, canManage, shots }: { episodeId: string; channelBase: string; canManage: boolean; shots: { id: string; description: string }[] }) {
+  const write = useWrite({ scope: `footage:${episodeId}` });
   const qc = useQueryClient();
   const key = ["clips", episodeId];
   const { data } = useQuery({ queryKey: key, queryFn: () => fetchJson<{ clips: ClipDto[] }>(`/api/episodes/${episodeId}/clips`) });
@@ -160,7 +162,7 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
                       className="max-w-56 rounded-plank border border-timber-300 bg-white px-1 py-0.5"
                       value={c.shotId ?? ""}
                       onChange={async (e) => {
-                        await send(`/api/clips/${c.id}`, "PATCH", { shotId: e.target.value || null }).catch((err: Error) => setMessage(err.message));
+                        await write(`/api/clips/${c.id}`, "PATCH", { shotId: e.target.value || null }).catch((err: Error) => setMessage(err.message));
                         await qc.invalidateQueries({ queryKey: key });
                         await qc.invalidateQueries({ queryKey: ["shots", episodeId] });
                       }}
@@ -182,7 +184,7 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
                       variant="quiet"
                       onClick={async () => {
                         if (!window.confirm(`Delete ${c.originalName}? The stored file is removed too.`)) return;
-                        await send(`/api/clips/${c.id}`, "DELETE").catch((err: Error) => setMessage(err.message));
+                        await write(`/api/clips/${c.id}`, "DELETE").catch((err: Error) => setMessage(err.message));
                         await qc.invalidateQueries({ queryKey: key });
                       }}
                     >

@@ -13,8 +13,9 @@ import { Caution } from "@/components/caution";
 import { PlanTimeline } from "./plan-timeline";
 import { StepForm, type StepBody } from "./step-form";
 import { FailureForm } from "./failure-form";
-import { fetchJson as api } from "@/components/fetch-json";
+import { fetchJson } from "@/components/fetch-json";
 import type { PlanDto, PlanStepDto, ToolDto } from "@/lib/schemas/build";
+import { useWrite } from "@/components/use-write";
 
 type Result = { ok: true } | { ok: false; message: string; fields?: Record<string, string[]> };
 
@@ -61,6 +62,7 @@ function StepItem({
   refresh: () => Promise<unknown>;
   onMove: (from: number, to: number) => void;
 }) {
+  const write = useWrite({ scope: `plan:${episodeId}` });
   const [mode, setMode] = useState<"view" | "edit" | "fail" | "remedy">("view");
   const { attributes, listeners, setNodeRef, transform, transition } = useSortable({ id: step.id, disabled: !canEdit });
   const title = (id: string) => plan.steps.find((s) => s.id === id)?.title ?? "a removed step";
@@ -156,7 +158,7 @@ function StepItem({
                       value={step.status}
                       onChange={async (e) => {
                         if (e.target.value === "failed") return setMode("fail");
-                        await api(`/api/steps/${step.id}`, { method: "PATCH", json: { status: e.target.value } });
+                        await write(`/api/steps/${step.id}`, "PATCH", { status: e.target.value });
                         await refresh();
                       }}
                     >
@@ -184,7 +186,7 @@ function StepItem({
                     variant="quiet"
                     onClick={async () => {
                       if (!window.confirm(`Delete the step “${step.title}”?`)) return;
-                      await api(`/api/steps/${step.id}`, { method: "DELETE" });
+                      await write(`/api/steps/${step.id}`, "DELETE");
                       await refresh();
                     }}
                   >
@@ -204,7 +206,7 @@ function StepItem({
               submitLabel="Save step"
               onCancel={() => setMode("view")}
               onSubmit={async (body: StepBody) => {
-                const r = await attempt(() => api(`/api/steps/${step.id}`, { method: "PATCH", json: body }));
+                const r = await attempt(() => write(`/api/steps/${step.id}`, "PATCH", body));
                 if (r.ok) {
                   await refresh();
                   setMode("view");
@@ -235,7 +237,7 @@ function StepItem({
                 submitLabel="Add remedy step"
                 onCancel={() => setMode("view")}
                 onSubmit={async (body) => {
-                  const r = await attempt(() => api(`/api/steps/${step.id}/remedies`, { method: "POST", json: body }));
+                  const r = await attempt(() => write(`/api/steps/${step.id}/remedies`, "POST", body));
                   if (r.ok) {
                     await refresh();
                     setMode("view");
@@ -252,16 +254,17 @@ function StepItem({
 }
 
 export function BuildPlan({ episodeId, tools, canEdit, canTime }: { episodeId: string; tools: ToolDto[]; canEdit: boolean; canTime: boolean }) {
+  const write = useWrite({ scope: `plan:${episodeId}` });
   const qc = useQueryClient();
   const key = useMemo(() => ["plan", episodeId], [episodeId]);
-  const { data: plan, error } = useQuery({ queryKey: key, queryFn: () => api<PlanDto>(`/api/episodes/${episodeId}/steps`) });
+  const { data: plan, error } = useQuery({ queryKey: key, queryFn: () => fetchJson<PlanDto>(`/api/episodes/${episodeId}/steps`) });
   const [status, setStatus] = useState("");
   const [moveError, setMoveError] = useState<string | null>(null);
   const refresh = () => qc.invalidateQueries({ queryKey: key });
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }), useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }));
 
   const reorder = useMutation({
-    mutationFn: (ids: string[]) => api(`/api/episodes/${episodeId}/steps/order`, { method: "PUT", json: { ids } }),
+    mutationFn: (ids: string[]) => fetchJson(`/api/episodes/${episodeId}/steps/order`, { method: "PUT", json: { ids } }),
     onMutate: async (ids) => {
       await qc.cancelQueries({ queryKey: key });
       const previous = qc.getQueryData<PlanDto>(key);
@@ -355,7 +358,7 @@ export function BuildPlan({ episodeId, tools, canEdit, canTime }: { episodeId: s
             timingOnly={false}
             submitLabel="Add step"
             onSubmit={async (body) => {
-              const r = await attempt(() => api(`/api/episodes/${episodeId}/steps`, { method: "POST", json: body }));
+              const r = await attempt(() => write(`/api/episodes/${episodeId}/steps`, "POST", body));
               if (r.ok) await refresh();
               return r;
             }}

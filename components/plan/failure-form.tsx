@@ -2,10 +2,11 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/field";
-import { fetchJson as api } from "@/components/fetch-json";
+import { useWrite } from "@/components/use-write";
 
 /** Asks what went wrong, uploads an optional photo straight to storage, then marks the step failed. */
 export function FailureForm({ episodeId, stepId, onDone, onCancel }: { episodeId: string; stepId: string; onDone: () => void; onCancel: () => void }) {
+  const write = useWrite({ scope: `plan:${episodeId}` });
   const [note, setNote] = useState("");
   const [file, setFile] = useState<File | null>(null);
   const [busy, setBusy] = useState<string | null>(null);
@@ -19,16 +20,15 @@ export function FailureForm({ episodeId, stepId, onDone, onCancel }: { episodeId
       let photoKey: string | null = null;
       if (file) {
         setBusy("Uploading photo…");
-        const signed = await api<{ key: string; uploadUrl: string; headers: Record<string, string> }>(`/api/episodes/${episodeId}/photos`, {
-          method: "POST",
-          json: { contentType: file.type, size: file.size },
-        });
+        const signed = await write<{ key: string; uploadUrl: string; headers: Record<string, string> }>(`/api/episodes/${episodeId}/photos`, "POST", { contentType: file.type, size: file.size });
+        // The bytes go straight to storage on the presigned URL, not to the API.
+        // eslint-disable-next-line no-restricted-globals
         const put = await fetch(signed.uploadUrl, { method: "PUT", headers: signed.headers, body: file });
         if (!put.ok) throw new Error("The photo upload failed; try again or save without it.");
         photoKey = signed.key;
       }
       setBusy("Saving…");
-      await api(`/api/steps/${stepId}/failure`, { method: "POST", json: { note, photoKey } });
+      await write(`/api/steps/${stepId}/failure`, "POST", { note, photoKey });
       onDone();
     } catch (err) {
       setError((err as Error).message);

@@ -10,8 +10,9 @@ import { formatDuration, formatTimecode, framesToSeconds, type Rate } from "@/li
 import { Notice } from "@/components/ui/field";
 import { Button } from "@/components/ui/button";
 import { SegmentEditor, type SaveState, type SegmentHandle } from "./segment-editor";
-import { ApiError as SaveError, send } from "@/components/fetch-json";
+import { ApiError as SaveError, fetchJson } from "@/components/fetch-json";
 import type { ScriptDto, SegmentDto } from "@/lib/schemas/script";
+import { useWrite } from "@/components/use-write";
 
 /** The script as the editor keeps it: the server's timing is not kept, the editor times every keystroke itself. */
 type ScriptData = Pick<ScriptDto, "rate" | "wordsPerMinute"> & { segments: SegmentDto[] };
@@ -37,9 +38,10 @@ function signedSeconds(frames: number, rate: Rate) {
 }
 
 export function ScriptEditor(p: Props) {
+  const write = useWrite({ scope: `script:${p.episodeId}` });
   const qc = useQueryClient();
   const key = useMemo(() => ["script", p.episodeId], [p.episodeId]);
-  const { data, error } = useQuery({ queryKey: key, queryFn: () => send<ScriptData>(`/api/episodes/${p.episodeId}/script`, "GET"), refetchOnWindowFocus: false });
+  const { data, error } = useQuery({ queryKey: key, queryFn: () => fetchJson<ScriptData>(`/api/episodes/${p.episodeId}/script`), refetchOnWindowFocus: false });
   const [drafts, setDrafts] = useState<Record<string, string>>({});
   const [states, setStates] = useState<Record<string, SaveState>>({});
   const [message, setMessage] = useState<{ tone: "ok" | "error" | "info"; text: string } | null>(null);
@@ -86,7 +88,7 @@ export function ScriptEditor(p: Props) {
 
   async function add(afterId: string | null, stepId: string | null = null, kind: SegmentKind = "voice_over") {
     try {
-      const { segment } = await send<{ segment: SegmentDto }>(`/api/episodes/${p.episodeId}/script`, "POST", { afterId, stepId, kind });
+      const { segment } = await write<{ segment: SegmentDto }>(`/api/episodes/${p.episodeId}/script`, "POST", { afterId, stepId, kind });
       focusNext.current = { id: segment.id, pos: "start" };
       await refresh();
       setAnnounce(`Added segment ${segment.position + 1}.`);
@@ -101,7 +103,7 @@ export function ScriptEditor(p: Props) {
     const stored = await handleFor(id)?.flush();
     if (stored === null) return setMessage({ tone: "error", text: "Save or merge this segment before splitting it." });
     try {
-      const r = await send<{ first: SegmentDto; second: SegmentDto }>(`/api/segments/${id}/split`, "POST", { version: (stored ?? seg).version, before, after });
+      const r = await write<{ first: SegmentDto; second: SegmentDto }>(`/api/segments/${id}/split`, "POST", { version: (stored ?? seg).version, before, after });
       setDrafts((d) => ({ ...d, [id]: r.first.text }));
       focusNext.current = { id: r.second.id, pos: "start" };
       await refresh();
@@ -123,7 +125,7 @@ export function ScriptEditor(p: Props) {
     const b = await handleFor(id)?.flush();
     if (a === null || b === null) return setMessage({ tone: "error", text: "Save or merge both segments before joining them." });
     try {
-      await send(`/api/segments/${prev.id}/join`, "POST", { version: (a ?? prev).version, nextVersion: (b ?? segments[i]!).version });
+      await write(`/api/segments/${prev.id}/join`, "POST", { version: (a ?? prev).version, nextVersion: (b ?? segments[i]!).version });
       focusNext.current = { id: prev.id, pos: "end" };
       setDrafts((d) => {
         const { [id]: _x, [prev.id]: _y, ...rest } = d;
@@ -140,7 +142,7 @@ export function ScriptEditor(p: Props) {
     const previous = qc.getQueryData<ScriptData>(key);
     if (previous) qc.setQueryData<ScriptData>(key, { ...previous, segments: ids.map((id) => previous.segments.find((s) => s.id === id)!) });
     try {
-      await send(`/api/episodes/${p.episodeId}/script/order`, "PUT", { ids });
+      await write(`/api/episodes/${p.episodeId}/script/order`, "PUT", { ids });
       setAnnounce(label);
     } catch (e) {
       if (previous) qc.setQueryData(key, previous);
@@ -266,7 +268,7 @@ export function ScriptEditor(p: Props) {
                 onInsertAfter={(id) => void add(id, segments.find((x) => x.id === id)?.stepId ?? null)}
                 onDelete={async (id) => {
                   if (!window.confirm("Delete this segment? It stays in the history and can be restored.")) return;
-                  await send(`/api/segments/${id}`, "DELETE").catch(fail);
+                  await write(`/api/segments/${id}`, "DELETE").catch(fail);
                   await refresh();
                 }}
               />
@@ -345,7 +347,7 @@ export function ScriptEditor(p: Props) {
         <Button
           onClick={async () => {
             try {
-              await send("/api/me", "PATCH", { readingRateWpm: wpm });
+              await write("/api/me", "PATCH", { readingRateWpm: wpm });
               setMessage({ tone: "ok", text: `Your reading rate is ${wpm} words a minute.` });
               await refresh();
             } catch (e) {
@@ -362,7 +364,7 @@ export function ScriptEditor(p: Props) {
               className="rounded-plank border border-timber-300 px-1 py-1"
               defaultValue={p.presenterId ?? ""}
               onChange={async (e) => {
-                await send(`/api/episodes/${p.episodeId}`, "PATCH", { presenterId: e.target.value || null }).catch(fail);
+                await write(`/api/episodes/${p.episodeId}`, "PATCH", { presenterId: e.target.value || null }).catch(fail);
                 await refresh();
               }}
             >
@@ -383,10 +385,11 @@ export function ScriptEditor(p: Props) {
 }
 
 function RevisionHistory({ episodeId, canRestore, onRestored }: { episodeId: string; canRestore: boolean; onRestored: () => Promise<unknown> }) {
+  const write = useWrite({ scope: `script:${episodeId}` });
   const [open, setOpen] = useState(false);
   const { data, refetch } = useQuery({
     queryKey: ["revisions", episodeId],
-    queryFn: () => send<{ revisions: { id: string; segmentId: string | null; before: { text?: string } | null; after: { text?: string } | null; createdAt: string; userName: string | null }[] }>(`/api/episodes/${episodeId}/script/revisions`, "GET"),
+    queryFn: () => fetchJson<{ revisions: { id: string; segmentId: string | null; before: { text?: string } | null; after: { text?: string } | null; createdAt: string; userName: string | null }[] }>(`/api/episodes/${episodeId}/script/revisions`),
     enabled: open,
   });
   return (
@@ -407,7 +410,7 @@ function RevisionHistory({ episodeId, canRestore, onRestored }: { episodeId: str
                   type="button"
                   className="rounded-plank border border-timber-300 px-2 text-xs hover:bg-timber-100"
                   onClick={async () => {
-                    await send(`/api/script-revisions/${r.id}/restore`, "POST");
+                    await write(`/api/script-revisions/${r.id}/restore`, "POST");
                     await onRestored();
                     await refetch();
                   }}

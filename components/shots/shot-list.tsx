@@ -9,7 +9,8 @@ import { TableHead } from "@/components/ui/table-head";
 import { InlineEdit } from "@/components/ui/inline-edit";
 import { Notice } from "@/components/ui/field";
 import { Checkbox } from "@/components/ui/checkbox";
-import { send } from "@/components/fetch-json";
+import { fetchJson } from "@/components/fetch-json";
+import { useWrite } from "@/components/use-write";
 
 type Shot = ShotDto;
 
@@ -30,9 +31,10 @@ function ChoiceCell<T extends string>({ canEdit, label, value, options, labels, 
 }
 
 export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: string; base: string; canEdit: boolean; steps: { id: string; title: string; coverageKinds: string[] }[] }) {
+  const write = useWrite({ scope: `shots:${episodeId}` });
   const qc = useQueryClient();
   const key = useMemo(() => ["shots", episodeId], [episodeId]);
-  const { data } = useQuery({ queryKey: key, queryFn: () => send(`/api/episodes/${episodeId}/shots`, "GET") as Promise<{ shots: Shot[] }> });
+  const { data } = useQuery({ queryKey: key, queryFn: () => fetchJson(`/api/episodes/${episodeId}/shots`) as Promise<{ shots: Shot[] }> });
   const [sorting, setSorting] = useState<SortingState>([]);
   const [selection, setSelection] = useState<RowSelectionState>({});
   const [statusFilter, setStatusFilter] = useState("");
@@ -44,13 +46,13 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
   const patch = useCallback(
     async (id: string, body: Record<string, unknown>) => {
       try {
-        await send(`/api/shots/${id}`, "PATCH", body);
+        await write(`/api/shots/${id}`, "PATCH", body);
         await refresh();
       } catch (e) {
         setMessage({ tone: "error", text: (e as Error).message });
       }
     },
-    [refresh],
+    [refresh, write],
   );
 
   // The table's data and columns must keep their identity between renders:
@@ -131,7 +133,7 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
                 key={s}
                 onClick={async () => {
                   try {
-                    await send(`/api/episodes/${episodeId}/shots/bulk`, "POST", { ids: selected, status: s });
+                    await write(`/api/episodes/${episodeId}/shots/bulk`, "POST", { ids: selected, status: s });
                     setSelection({});
                     setMessage({ tone: "ok", text: `${selected.length} shots set to ${SHOT_STATUS_LABELS[s]}.` });
                     await refresh();
@@ -188,7 +190,7 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
               disabled={!planStep}
               onClick={async () => {
                 try {
-                  const r = await send(`/api/steps/${planStep}/planned-shots`, "POST");
+                  const r = await write(`/api/steps/${planStep}/planned-shots`, "POST");
                   setMessage({ tone: "ok", text: `${r.shots.length} shots added${r.skipped ? `, ${r.skipped} already on the list` : ""}.` });
                   await refresh();
                 } catch (e) {
@@ -205,7 +207,7 @@ export function ShotList({ episodeId, base, canEdit, steps }: { episodeId: strin
             onSubmit={async (e) => {
               e.preventDefault();
               try {
-                await send(`/api/episodes/${episodeId}/shots`, "POST", { kind: newShot.kind, description: newShot.description, stepId: newShot.stepId || null });
+                await write(`/api/episodes/${episodeId}/shots`, "POST", { kind: newShot.kind, description: newShot.description, stepId: newShot.stepId || null });
                 setNewShot({ ...newShot, description: "" });
                 await refresh();
               } catch (err) {
