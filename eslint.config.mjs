@@ -58,4 +58,11 @@ export default tseslint.config(
       "no-restricted-globals": ["error", { name: "fetch", message: "use fetchJson in a query, or useWrite for a write (components/use-write.ts)" }],
     },
   },
+  {
+    // Colours come from the Tailwind tokens (tailwind.config.ts), never hex literals in screens.
+    files: ["components/**/*.tsx", "app/**/*.tsx"],
+    rules: {
+      "no-restricted-syntax": ["error", { selector: "Literal[value=/#[0-9a-fA-F]{6}\\b|#[0-9a-fA-F]{3}\\b/]", message: "use a colour token (fill-walnut-700, bg-timber-100, ...)" }, { selector: "TemplateElement[value.raw=/#[0-9a-fA-F]{6}\\b/]", message: "use a colour token" }],
+    },
+  },
 );

@@ -6,7 +6,7 @@ export default function AuthLayout({ children }: { children: React.ReactNode }) 
           <span className="text-2xl font-bold tracking-tight">Jigboard</span>
           <span className="text-sm text-walnut-600">build · film · publish</span>
         </p>
-        <div className="rounded-plank border border-timber-300 bg-white p-6 shadow-[0_2px_0_#d5bd93]">{children}</div>
+        <div className="rounded-plank border border-timber-300 bg-white p-6 shadow-[0_2px_0_theme(colors.timber.300)]">{children}</div>
       </div>
     </main>
   );

@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { useEffect, useRef, useState } from "react";
+import * as Menu from "@radix-ui/react-dropdown-menu";
 import { useSortable } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
 import { format, parseISO } from "date-fns";
@@ -57,23 +57,7 @@ export function EpisodeCard({
     disabled: !draggable,
     data: { stage: episode.stage },
   });
-  const [open, setOpen] = useState(false);
-  const trigger = useRef<HTMLButtonElement>(null);
-  const menu = useRef<HTMLDivElement>(null);
-
-  useEffect(() => {
-    if (open) menu.current?.querySelector<HTMLButtonElement>("button:not([disabled])")?.focus();
-  }, [open]);
-
-  const close = () => {
-    setOpen(false);
-    trigger.current?.focus();
-  };
-  const go = (m: MoveRequest) => {
-    setOpen(false);
-    onMove(m);
-    trigger.current?.focus();
-  };
+  const go = (m: MoveRequest) => onMove(m);
 
   const moveAllowed = (to: Stage) => canMoveEpisode(roles, episode.stage, to);
   const style = { transform: CSS.Transform.toString(transform), transition };
@@ -84,7 +68,7 @@ export function EpisodeCard({
       style={style}
       data-testid="episode-card"
       data-episode-id={episode.id}
-      className={`relative rounded-plank border border-timber-300 bg-white shadow-[0_1px_0_#d5bd93] ${isDragging ? "opacity-60 ring-2 ring-chalk-600" : ""}`}
+      className={`relative rounded-plank border border-timber-300 bg-white shadow-[0_1px_0_theme(colors.timber.300)] ${isDragging ? "opacity-60 ring-2 ring-chalk-600" : ""}`}
     >
       <div className="flex">
         <span aria-hidden className="w-1.5 shrink-0 rounded-l-plank" style={{ background: STAGE_COLOURS[episode.stage] }} />
@@ -136,64 +120,55 @@ export function EpisodeCard({
             ))}
           </dl>
           <div className="mt-2 flex justify-end">
-            <button
-              ref={trigger}
-              type="button"
-              aria-haspopup="true"
-              aria-expanded={open}
-              onClick={() => setOpen((o) => !o)}
-              className="rounded-plank border border-timber-300 px-2 py-0.5 text-xs hover:bg-timber-100"
-            >
-              Move to…
-            </button>
+            {/* An accessible menu primitive: arrow keys, type-ahead, Escape, focus return and the menu roles come from Radix. */}
+            <Menu.Root modal={false}>
+              <Menu.Trigger asChild>
+                <button type="button" className="rounded-plank border border-timber-300 px-2 py-0.5 text-xs hover:bg-timber-100">
+                  Move to…
+                </button>
+              </Menu.Trigger>
+              <Menu.Portal>
+                <Menu.Content
+                  align="end"
+                  sideOffset={4}
+                  aria-label={`Move ${episode.title}`}
+                  className="z-30 min-w-48 max-w-72 rounded-plank border border-walnut-700 bg-timber-50 p-1.5 text-sm text-walnut-900 shadow-lg"
+                >
+                  {!draggable ? (
+                    <p className="p-1 text-walnut-800" data-testid="move-refused">
+                      Your role ({roles.map((r) => ROLE_LABELS[r]).join(", ")}) can read the board but not move episodes. Ask a presenter, a producer or the owner.
+                    </p>
+                  ) : (
+                    <>
+                      <Menu.Label className="px-2 pb-1 text-xs text-walnut-600">Within {STAGE_INFO[episode.stage].label}</Menu.Label>
+                      <Menu.Item className="block rounded-plank px-2 py-1 outline-none data-[disabled]:cursor-not-allowed data-[disabled]:opacity-40 data-[highlighted]:bg-white data-[highlighted]:ring-2 data-[highlighted]:ring-chalk-600" disabled={indexInColumn === 0 || !moveAllowed(episode.stage)} onSelect={() => go({ id: episode.id, stage: episode.stage, index: indexInColumn - 1 })}>
+                        Up one
+                      </Menu.Item>
+                      <Menu.Item className="block rounded-plank px-2 py-1 outline-none data-[disabled]:cursor-not-allowed data-[disabled]:opacity-40 data-[highlighted]:bg-white data-[highlighted]:ring-2 data-[highlighted]:ring-chalk-600" disabled={indexInColumn >= columnLength - 1 || !moveAllowed(episode.stage)} onSelect={() => go({ id: episode.id, stage: episode.stage, index: indexInColumn + 1 })}>
+                        Down one
+                      </Menu.Item>
+                      <Menu.Separator className="my-1 h-px bg-timber-300" />
+                      <Menu.Label className="px-2 pb-1 text-xs text-walnut-600">To another stage</Menu.Label>
+                      {STAGES.filter((st) => st !== episode.stage).map((st) => (
+                        <Menu.Item
+                          key={st}
+                          disabled={!moveAllowed(st)}
+                          title={moveAllowed(st) ? undefined : "Your role cannot move episodes to this stage"}
+                          onSelect={() => go({ id: episode.id, stage: st, index: Number.MAX_SAFE_INTEGER })}
+                          className="flex items-center gap-2 rounded-plank px-2 py-1 outline-none data-[disabled]:cursor-not-allowed data-[disabled]:opacity-40 data-[highlighted]:bg-white data-[highlighted]:ring-2 data-[highlighted]:ring-chalk-600"
+                        >
+                          <span className="num w-4 text-walnut-600">{STAGE_INFO[st].step}</span>
+                          {STAGE_INFO[st].label}
+                        </Menu.Item>
+                      ))}
+                    </>
+                  )}
+                </Menu.Content>
+              </Menu.Portal>
+            </Menu.Root>
           </div>
         </div>
       </div>
-      {open ? (
-        <div
-          ref={menu}
-          role="group"
-          aria-label={`Move ${episode.title}`}
-          onKeyDown={(e) => e.key === "Escape" && close()}
-          className="absolute left-1 right-1 top-full z-20 mt-1 min-w-44 rounded-plank border border-walnut-700 bg-timber-50 p-2 text-sm shadow-lg"
-        >
-          {!draggable ? (
-            <p className="p-1 text-walnut-800" data-testid="move-refused">
-              Your role ({roles.map((r) => ROLE_LABELS[r]).join(", ")}) can read the board but not move episodes. Ask a presenter, a producer or the owner.
-            </p>
-          ) : (
-            <>
-              <div className="mb-1 flex gap-1">
-                <button type="button" className="flex-1 rounded-plank border border-timber-300 px-2 py-1 hover:bg-white disabled:opacity-40" disabled={indexInColumn === 0 || !moveAllowed(episode.stage)} onClick={() => go({ id: episode.id, stage: episode.stage, index: indexInColumn - 1 })}>
-                  Up one
-                </button>
-                <button type="button" className="flex-1 rounded-plank border border-timber-300 px-2 py-1 hover:bg-white disabled:opacity-40" disabled={indexInColumn >= columnLength - 1 || !moveAllowed(episode.stage)} onClick={() => go({ id: episode.id, stage: episode.stage, index: indexInColumn + 1 })}>
-                  Down one
-                </button>
-              </div>
-              <ul className="space-y-0.5">
-                {STAGES.filter((s) => s !== episode.stage).map((s) => (
-                  <li key={s}>
-                    <button
-                      type="button"
-                      disabled={!moveAllowed(s)}
-                      title={moveAllowed(s) ? undefined : "Your role cannot move episodes to this stage"}
-                      onClick={() => go({ id: episode.id, stage: s, index: Number.MAX_SAFE_INTEGER })}
-                      className="flex w-full items-center gap-2 rounded-plank px-2 py-1 text-left hover:bg-white disabled:cursor-not-allowed disabled:opacity-40"
-                    >
-                      <span className="num w-4 text-walnut-600">{STAGE_INFO[s].step}</span>
-                      {STAGE_INFO[s].label}
-                    </button>
-                  </li>
-                ))}
-              </ul>
-            </>
-          )}
-          <button type="button" onClick={close} className="mt-1 w-full rounded-plank px-2 py-1 text-xs text-walnut-700 hover:bg-white">
-            Close
-          </button>
-        </div>
-      ) : null}
     </li>
   );
 }

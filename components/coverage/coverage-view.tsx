@@ -11,7 +11,9 @@ import { fetchJson } from "@/components/fetch-json";
 import type { CoverageDto } from "@/lib/schemas/footage";
 import { useWrite } from "@/components/use-write";
 
-const KIND_FILL: Record<SegmentKind, string> = { to_camera: "#54402f", voice_over: "#b89a6a", sponsor_read: "#7a5a86", on_screen_text: "#e8d9bd" };
+/** Fill per segment kind, as colour tokens. */
+const KIND_FILL: Record<SegmentKind, string> = { to_camera: "fill-walnut-700", voice_over: "fill-timber-400", sponsor_read: "fill-stage-review", on_screen_text: "fill-timber-200" };
+const KIND_SWATCH: Record<SegmentKind, string> = { to_camera: "bg-walnut-700", voice_over: "bg-timber-400", sponsor_read: "bg-stage-review", on_screen_text: "bg-timber-200" };
 
 
 /** Script, B-roll and gaps on one timecode ruler, the same scale for all three rows. */
@@ -27,26 +29,27 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
   const laneCount = Math.max(1, ...lanes.map((l) => l + 1));
   const rows = { script: 28, broll: 70, gaps: 112 };
   const H = rows.gaps + laneCount * 22 + 16;
-  const focusable = { tabIndex: 0, className: "outline-none focus:stroke-chalk-600 focus:[stroke-width:3]" };
+  const focusable = { tabIndex: 0 };
+  const FOCUS = "outline-none focus:stroke-chalk-600 focus:[stroke-width:3]";
   return (
     <svg viewBox={`0 0 ${W} ${H}`} width="100%" role="group" aria-label="Coverage timeline: script, B-roll and gaps" className="min-w-[700px] rounded-plank border border-timber-300 bg-white" data-testid="coverage-timeline">
       {ticks.map((t) => (
         <g key={t.frame}>
-          <line x1={x(t.frame)} x2={x(t.frame)} y1={14} y2={H - 5} stroke="#e8d9bd" />
-          <text x={Math.min(x(t.frame), W - 24)} y={11} fontSize="9" textAnchor="middle" fill="#6b5442" fontFamily="JetBrains Mono, monospace" data-testid="ruler-label">
+          <line className="stroke-timber-200" x1={x(t.frame)} x2={x(t.frame)} y1={14} y2={H - 5} />
+          <text className="fill-walnut-600" x={Math.min(x(t.frame), W - 24)} y={11} fontSize="9" textAnchor="middle" fontFamily="JetBrains Mono, monospace" data-testid="ruler-label">
             {t.label}
           </text>
         </g>
       ))}
       {Object.entries({ script: "Script", broll: "B-roll", gaps: "Gaps" }).map(([k, label]) => (
-        <text key={k} x={4} y={rows[k as keyof typeof rows] + 13} fontSize="11" fill="#2a1c12">
+        <text className="fill-walnut-900" key={k} x={4} y={rows[k as keyof typeof rows] + 13} fontSize="11">
           {label}
         </text>
       ))}
       {data.segments.map((s) => {
         const t = `${SEGMENT_KIND_LABELS[s.kind]} ${s.startTimecode}–${s.endTimecode}`;
         return (
-          <rect key={s.id} {...focusable} x={x(s.start)} y={rows.script} width={Math.max(1, x(s.end) - x(s.start))} height={18} fill={KIND_FILL[s.kind]} stroke="#fff" onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)}>
+          <rect className={`stroke-white ${KIND_FILL[s.kind]} ${FOCUS}`} key={s.id} {...focusable} x={x(s.start)} y={rows.script} width={Math.max(1, x(s.end) - x(s.start))} height={18} onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)}>
             <title>{t}</title>
           </rect>
         );
@@ -54,7 +57,7 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
       {data.ranges.map((r) => {
         const t = `B-roll ${r.startTimecode}–${r.endTimecode}${r.note ? ` (${r.note})` : ""}`;
         return (
-          <rect key={r.id} {...focusable} x={x(r.startFrame)} y={rows.broll} width={Math.max(1, x(r.endFrame) - x(r.startFrame))} height={18} fill="#2f7a78" opacity={0.85} onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)} data-testid="broll-range">
+          <rect className={`fill-broll ${FOCUS}`} key={r.id} {...focusable} x={x(r.startFrame)} y={rows.broll} width={Math.max(1, x(r.endFrame) - x(r.startFrame))} height={18} opacity={0.85} onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)} data-testid="broll-range">
             <title>{t}</title>
           </rect>
         );
@@ -64,10 +67,10 @@ function Timeline({ data, rate, onFocus }: { data: CoverageDto; rate: Rate; onFo
         const y = rows.gaps + lanes[i]! * 22;
         return (
           <g key={g.key}>
-            <rect {...focusable} x={x(g.startFrame)} y={y} width={Math.max(2, x(g.endFrame) - x(g.startFrame))} height={18} fill="#fbeaec" stroke="#9b0d23" strokeWidth={1.5} strokeDasharray={g.pickupShotId ? "1 2" : "4 2"} onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)} data-testid="gap-block">
+            <rect className={`fill-fault-100 stroke-fault-700 ${FOCUS}`} {...focusable} x={x(g.startFrame)} y={y} width={Math.max(2, x(g.endFrame) - x(g.startFrame))} height={18} strokeWidth={1.5} strokeDasharray={g.pickupShotId ? "1 2" : "4 2"} onFocus={() => onFocus(t)} onMouseEnter={() => onFocus(t)} data-testid="gap-block">
               <title>{t}</title>
             </rect>
-            <text x={x(g.startFrame) + 2} y={y + 13} fontSize="10" fill="#9b0d23" pointerEvents="none">
+            <text className="fill-fault-700" x={x(g.startFrame) + 2} y={y + 13} fontSize="10" pointerEvents="none">
               {g.pickupShotId ? "P" : "!"}
             </text>
           </g>
@@ -127,7 +130,7 @@ export function CoverageView({ episodeId, base, canManage, canShots, clips }: { 
       <div className="flex flex-wrap gap-3 text-xs text-walnut-700">
         {(Object.keys(KIND_FILL) as SegmentKind[]).map((k) => (
           <span key={k} className="flex items-center gap-1">
-            <span className="inline-block h-3 w-5 border border-walnut-700" style={{ background: KIND_FILL[k] }} aria-hidden /> {SEGMENT_KIND_LABELS[k]}
+            <span className={`inline-block h-3 w-5 border border-walnut-700 ${KIND_SWATCH[k]}`} aria-hidden /> {SEGMENT_KIND_LABELS[k]}
           </span>
         ))}
         <span className="flex items-center gap-1">

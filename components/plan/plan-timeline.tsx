@@ -37,14 +37,14 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
       <svg viewBox={`0 0 ${width} ${height}`} width="100%" role="img" aria-label={`Build timeline: ${bars.length} steps over ${formatMinutes(total)} elapsed, not clock times.`} className="min-w-[640px]">
         <defs>
           <pattern id="wait-hatch" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
-            <rect width="6" height="6" fill="#f4ecdc" />
-            <line x1="0" y1="0" x2="0" y2="6" stroke="#846b57" strokeWidth="2" />
+            <rect className="fill-timber-100" width="6" height="6" />
+            <line className="stroke-walnut-500" x1="0" y1="0" x2="0" y2="6" strokeWidth="2" />
           </pattern>
         </defs>
         {ticks.map((t) => (
           <g key={t}>
-            <line x1={x(t)} x2={x(t)} y1={top - 6} y2={height - 4} stroke="#e8d9bd" />
-            <text x={x(t)} y={top - 10} fontSize="10" textAnchor="middle" fill="#6b5442" fontFamily="JetBrains Mono, monospace">
+            <line className="stroke-timber-200" x1={x(t)} x2={x(t)} y1={top - 6} y2={height - 4} />
+            <text className="fill-walnut-600" x={x(t)} y={top - 10} fontSize="10" textAnchor="middle" fontFamily="JetBrains Mono, monospace">
               {t === 0 ? "start" : `+${formatMinutes(t)}`}
             </text>
           </g>
@@ -53,16 +53,16 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
           const y = top + i * rowH + 4;
           return (
             <g key={b.id}>
-              <text x={labelW - 8} y={y + 13} fontSize="12" textAnchor="end" fill="#2a1c12">
+              <text className="fill-walnut-900" x={labelW - 8} y={y + 13} fontSize="12" textAnchor="end">
                 {b.label.length > 30 ? `${b.label.slice(0, 29)}…` : b.label}
               </text>
               {b.activeEnd > b.start ? (
-                <rect x={x(b.start)} y={y} width={Math.max(2, x(b.activeEnd) - x(b.start))} height={18} fill={b.failed ? "#9b0d23" : "#1f5f8b"} stroke={b.critical ? "#2a1c12" : "none"} strokeWidth={b.critical ? 2 : 0}>
+                <rect x={x(b.start)} y={y} width={Math.max(2, x(b.activeEnd) - x(b.start))} height={18} className={`${b.failed ? "fill-fault-700" : "fill-chalk-600"} ${b.critical ? "stroke-walnut-900" : "stroke-none"}`} strokeWidth={b.critical ? 2 : 0}>
                   <title>{`${b.label}: hands-on ${formatMinutes(b.activeEnd - b.start)}${b.critical ? " (critical path)" : ""}`}</title>
                 </rect>
               ) : null}
               {b.end > b.activeEnd ? (
-                <rect x={x(b.activeEnd)} y={y} width={Math.max(2, x(b.end) - x(b.activeEnd))} height={18} fill="url(#wait-hatch)" stroke={b.critical ? "#2a1c12" : "#846b57"} strokeWidth={b.critical ? 2 : 1}>
+                <rect x={x(b.activeEnd)} y={y} width={Math.max(2, x(b.end) - x(b.activeEnd))} height={18} fill="url(#wait-hatch)" className={b.critical ? "stroke-walnut-900" : "stroke-walnut-500"} strokeWidth={b.critical ? 2 : 1}>
                   <title>{`${b.label}: wait ${formatMinutes(b.end - b.activeEnd)}`}</title>
                 </rect>
               ) : null}
@@ -77,7 +77,7 @@ export function PlanTimeline({ bars, total }: { bars: Bar[]; total: number }) {
         </span>
         <span className="flex items-center gap-1">
           <svg width="20" height="12" aria-hidden>
-            <rect width="20" height="12" fill="url(#wait-hatch)" stroke="#846b57" />
+            <rect className="stroke-walnut-500" width="20" height="12" fill="url(#wait-hatch)" />
           </svg>
           wait (cure, dry, acclimatise)
         </span>

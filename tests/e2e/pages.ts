@@ -25,7 +25,8 @@ export class BoardPage {
   }
   async moveWithMenu(title: string, stageLabel: string) {
     await this.card(title).getByRole("button", { name: "Move to…" }).click();
-    await this.card(title).getByRole("button", { name: new RegExp(`${stageLabel}$`) }).click();
+    // The menu opens in a portal, outside the card.
+    await this.page.getByRole("menu").getByRole("menuitem", { name: new RegExp(`${stageLabel}$`) }).click();
   }
   status(): Locator {
     return this.page.getByTestId("board-status");
