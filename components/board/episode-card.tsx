@@ -132,6 +132,8 @@ export function EpisodeCard({
                   align="end"
                   sideOffset={4}
                   aria-label={`Move ${episode.title}`}
+                  // Named for the episode, not for the trigger (every card's trigger reads "Move to…").
+                  aria-labelledby={undefined}
                   className="z-30 min-w-48 max-w-72 rounded-plank border border-walnut-700 bg-timber-50 p-1.5 text-sm text-walnut-900 shadow-lg"
                 >
                   {!draggable ? (

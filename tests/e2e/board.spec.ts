@@ -40,6 +40,25 @@ test("presenter creates an episode, moves it by keyboard and by menu, and it per
   await expect(board.status()).toContainText(`Moved “${title}” to Editing`);
   await page.reload();
   await expect(board.column("Editing").getByTestId("episode-card").filter({ hasText: title })).toBeVisible();
+
+  // The menu by keyboard alone: Enter opens it on its first item, arrows move, Enter chooses, focus returns (WAI-ARIA menu button pattern).
+  const trigger = board.card(title).getByRole("button", { name: "Move to…" });
+  await trigger.focus();
+  await page.keyboard.press("Enter");
+  const menu = page.getByRole("menu", { name: `Move ${title}` });
+  await expect(menu).toBeVisible();
+  await shot(page, "board-move-menu");
+  await page.keyboard.press("Escape");
+  await expect(menu).toHaveCount(0);
+  await expect(trigger).toBeFocused();
+  await page.keyboard.press("Enter");
+  await expect(menu.getByRole("menuitem", { name: /Final check$/ })).toBeVisible();
+  for (let i = 0; i < 8 && !(await menu.getByRole("menuitem", { name: /Final check$/ }).evaluate((el) => el === document.activeElement)); i++) await page.keyboard.press("ArrowDown");
+  await page.keyboard.press("Enter");
+  await expect(board.status()).toContainText(`Moved “${title}” to Final check`);
+  await expect(board.column("Final check").getByTestId("episode-card").filter({ hasText: title })).toBeVisible();
+  await board.moveWithMenu(title, "Editing");
+  await expect(board.status()).toContainText(`Moved “${title}” to Editing`);
   await shot(page, "board-presenter");
 
   // Edit through the same form and schema; the stored runtime comes back as minutes.
