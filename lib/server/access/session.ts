@@ -1,40 +1,27 @@
 import "server-only";
 import { cache } from "react";
-import { decode } from "next-auth/jwt";
+import { getToken } from "next-auth/jwt";
+import { parse as parseCookie } from "cookie";
 import { env } from "../../env";
 import { AppError } from "../http/errors";
 import { getUserById } from "../../../db/queries/users";
 
-const COOKIE_NAMES = ["__Secure-next-auth.session-token", "next-auth.session-token"];
+const SECURE_COOKIE = "__Secure-next-auth.session-token";
+const PLAIN_COOKIE = "next-auth.session-token";
 
-function parseCookies(header: string | null): Map<string, string> {
-  const map = new Map<string, string>();
-  if (!header) return map;
-  for (const part of header.split(";")) {
-    const i = part.indexOf("=");
-    if (i < 0) continue;
-    map.set(part.slice(0, i).trim(), decodeURIComponent(part.slice(i + 1).trim()));
-  }
-  return map;
-}
-
-/** Reads next-auth's JWT session cookie (chunked or not) from a Cookie header: the user and the session version it was signed with. */
+/**
+ * Reads next-auth's JWT session cookie (chunked or not) from a Cookie header
+ * with next-auth's own getToken: the user and the session version it was
+ * signed with. Both cookie names are tried, so a session set over https
+ * (secure name) and one set over plain http on 127.0.0.1 are both read.
+ */
 export async function sessionFromCookieHeader(header: string | null): Promise<{ sub: string; sv: number } | null> {
-  const cookies = parseCookies(header);
-  for (const name of COOKIE_NAMES) {
-    let token = cookies.get(name);
-    if (!token) {
-      const chunks: string[] = [];
-      for (let i = 0; cookies.has(`${name}.${i}`); i++) chunks.push(cookies.get(`${name}.${i}`)!);
-      token = chunks.join("") || undefined;
-    }
-    if (!token) continue;
-    try {
-      const payload = await decode({ token, secret: env().NEXTAUTH_SECRET });
-      if (payload?.sub) return { sub: payload.sub, sv: typeof payload.sv === "number" ? payload.sv : 0 };
-    } catch {
-      return null;
-    }
+  if (!header) return null;
+  const cookies = new Map(Object.entries(parseCookie(header)).filter((e): e is [string, string] => typeof e[1] === "string"));
+  const req = { cookies, headers: {} } as unknown as Parameters<typeof getToken>[0]["req"];
+  for (const cookieName of [SECURE_COOKIE, PLAIN_COOKIE]) {
+    const payload = await getToken({ req, cookieName, secureCookie: cookieName === SECURE_COOKIE, secret: env().NEXTAUTH_SECRET }).catch(() => null);
+    if (payload?.sub) return { sub: payload.sub, sv: typeof payload.sv === "number" ? payload.sv : 0 };
   }
   return null;
 }
