@@ -36,6 +36,11 @@ export async function listStepsWithLinks(q: Q, episodeId: string): Promise<StepW
   }));
 }
 
+/** Ids and titles of an episode's steps (to check a link to a step, or to name it). */
+export async function listStepTitlesByEpisode({ episodeId }: { episodeId: string }) {
+  return db().select({ id: buildSteps.id, title: buildSteps.title }).from(buildSteps).where(eq(buildSteps.episodeId, episodeId));
+}
+
 export function listStepsByEpisode({ episodeId }: { episodeId: string }) {
   return listStepsWithLinks(db(), episodeId);
 }

@@ -12,10 +12,6 @@ export async function getMaterialById({ id }: { id: string }) {
   return row ?? null;
 }
 
-export async function stepIdsOfEpisode({ episodeId }: { episodeId: string }) {
-  const rows = await db().select({ id: buildSteps.id, title: buildSteps.title }).from(buildSteps).where(eq(buildSteps.episodeId, episodeId));
-  return rows;
-}
 
 export async function countMaterials(tx: Tx, episodeId: string) {
   const rows = await tx.select({ id: materials.id }).from(materials).where(eq(materials.episodeId, episodeId));

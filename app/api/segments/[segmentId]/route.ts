@@ -4,7 +4,7 @@ import { assertCan } from "@/lib/server/access/access";
 import { ANNOTATION_FIELDS, segmentSaveSchema } from "@/lib/schemas/script";
 import { deleteSegment, saveSegment } from "@/lib/server/services/script";
 import { toSegmentDto } from "@/lib/server/views/script";
-import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { listStepTitlesByEpisode } from "@/db/queries/build";
 import { AppError } from "@/lib/server/http/errors";
 
 /**
@@ -17,7 +17,7 @@ export const PATCH = channelRoute({ load: "segment", action: ["script.write", "s
   const { version: _v, ...fields } = save;
   const annotationOnly = Object.keys(fields).every((k) => (ANNOTATION_FIELDS as readonly string[]).includes(k));
   assertCan(access, annotationOnly ? "script.annotate" : "script.write");
-  if (fields.stepId && !(await stepIdsOfEpisode({ episodeId: segment.episodeId })).some((s) => s.id === fields.stepId)) {
+  if (fields.stepId && !(await listStepTitlesByEpisode({ episodeId: segment.episodeId })).some((s) => s.id === fields.stepId)) {
     throw new AppError("unprocessable:segment.step", "That build step is not in this episode.", { fields: { stepId: ["not a step of this episode"] } });
   }
   const r = await saveSegment({ id: segment.id, userId: user.id, save });

@@ -3,7 +3,7 @@ import { json } from "@/lib/server/http/api";
 import { segmentCreateSchema } from "@/lib/schemas/script";
 import { createSegment } from "@/lib/server/services/script";
 import { toSegmentDto } from "@/lib/server/views/script";
-import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { listStepTitlesByEpisode } from "@/db/queries/build";
 import { scriptViewFor } from "@/lib/server/views/script";
 import { AppError } from "@/lib/server/http/errors";
 
@@ -14,7 +14,7 @@ export const GET = channelRoute({ load: "episode", action: "channel.read" }, asy
 
 export const POST = channelRoute({ load: "episode", action: "script.write", body: segmentCreateSchema, what: "segment" }, async ({ episode, user, body }) => {
   const input = body;
-  if (input.stepId && !(await stepIdsOfEpisode({ episodeId: episode.id })).some((s) => s.id === input.stepId)) {
+  if (input.stepId && !(await listStepTitlesByEpisode({ episodeId: episode.id })).some((s) => s.id === input.stepId)) {
     throw new AppError("unprocessable:segment.step", "That build step is not in this episode.", { fields: { stepId: ["not a step of this episode"] } });
   }
   const r = await createSegment({ episodeId: episode.id, userId: user.id, input });

@@ -1,7 +1,8 @@
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { json } from "@/lib/server/http/api";
 import { materialCreateSchema, type MaterialCreate } from "@/lib/schemas/build";
-import { listMaterialsByEpisode, stepIdsOfEpisode } from "@/db/queries/materials";
+import { listMaterialsByEpisode } from "@/db/queries/materials";
+import { listStepTitlesByEpisode } from "@/db/queries/build";
 import { createMaterials } from "@/lib/server/services/materials";
 import { toMaterialInput } from "@/lib/server/views/materials";
 import { parseCsv, recordToBody, toCsv } from "@/lib/cut-list-csv";
@@ -11,7 +12,7 @@ import { fileSlug } from "@/lib/file-name";
 const MAX_CSV_BYTES = 2 * 1024 * 1024;
 
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
-  const [rows, steps] = await Promise.all([listMaterialsByEpisode({ episodeId: episode.id }), stepIdsOfEpisode({ episodeId: episode.id })]);
+  const [rows, steps] = await Promise.all([listMaterialsByEpisode({ episodeId: episode.id }), listStepTitlesByEpisode({ episodeId: episode.id })]);
   const title = new Map(steps.map((s) => [s.id, s.title]));
   const csv = toCsv(rows.map(toMaterialInput).map((r) => ({ ...r, stepTitle: r.stepId ? (title.get(r.stepId) ?? null) : null })));
   const name = fileSlug(episode.title);
@@ -31,7 +32,7 @@ export const POST = channelRoute({ load: "episode", action: "build.edit", accept
   const parsed = parseCsv(text);
   if (!parsed.ok) throw new AppError("validation:csv", parsed.message);
   if (parsed.records.length === 0) throw new AppError("validation:csv", "The file has a header but no rows.");
-  const steps = await stepIdsOfEpisode({ episodeId: episode.id });
+  const steps = await listStepTitlesByEpisode({ episodeId: episode.id });
   const byTitle = new Map(steps.map((s) => [s.title.toLowerCase(), s.id]));
   const fields: Record<string, string[]> = {};
   const rows: MaterialCreate[] = [];

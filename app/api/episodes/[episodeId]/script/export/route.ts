@@ -2,14 +2,14 @@ import { channelRoute } from "@/lib/server/http/route-builder";
 import { parseQuery } from "@/lib/server/http/api";
 import { exportQuerySchema } from "@/lib/schemas/script";
 import { scriptViewFor } from "@/lib/server/views/script";
-import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { listStepTitlesByEpisode } from "@/db/queries/build";
 import { SEGMENT_KIND_LABELS } from "@/lib/script-timing";
 import { fileSlug } from "@/lib/file-name";
 
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode, req }) => {
   const { format } = parseQuery(req, exportQuerySchema);
   const view = await scriptViewFor(episode);
-  const steps = new Map((await stepIdsOfEpisode({ episodeId: episode.id })).map((s) => [s.id, s.title]));
+  const steps = new Map((await listStepTitlesByEpisode({ episodeId: episode.id })).map((s) => [s.id, s.title]));
   const slug = fileSlug(episode.title);
   if (format === "json") {
     const body = {

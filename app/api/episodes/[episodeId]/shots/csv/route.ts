@@ -2,10 +2,10 @@ import Papa from "papaparse";
 import { channelRoute } from "@/lib/server/http/route-builder";
 import { CSV_EXPORT_OPTIONS } from "@/lib/cut-list-csv";
 import { listShotsByEpisode } from "@/db/queries/shots";
-import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { listStepTitlesByEpisode } from "@/db/queries/build";
 
 export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
-  const [shots, steps] = await Promise.all([listShotsByEpisode({ episodeId: episode.id }), stepIdsOfEpisode({ episodeId: episode.id })]);
+  const [shots, steps] = await Promise.all([listShotsByEpisode({ episodeId: episode.id }), listStepTitlesByEpisode({ episodeId: episode.id })]);
   const title = new Map(steps.map((s) => [s.id, s.title]));
   const csv = Papa.unparse({
     fields: ["kind", "description", "step", "framing", "camera_notes", "priority", "status"],

@@ -1,5 +1,5 @@
 import { episodePage } from "@/lib/server/access/episode-page";
-import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { listStepTitlesByEpisode } from "@/db/queries/build";
 import { listMembersByChannel } from "@/db/queries/channels";
 import { getUserById } from "@/db/queries/users";
 import { can } from "@/lib/permissions";
@@ -11,7 +11,7 @@ export default async function ScriptPage({ params }: { params: Promise<{ channel
   const { channelId, episodeId } = await params;
   const { access, episode } = await episodePage(channelId, episodeId, `/c/${channelId}/episodes/${episodeId}/script`);
   const [steps, members, me] = await Promise.all([
-    stepIdsOfEpisode({ episodeId: episode.id }),
+    listStepTitlesByEpisode({ episodeId: episode.id }),
     listMembersByChannel({ channelId: access.channelId }),
     getUserById({ id: access.user.id }),
   ]);

@@ -1,6 +1,6 @@
 import { episodePage } from "@/lib/server/access/episode-page";
 import { scriptViewFor } from "@/lib/server/views/script";
-import { stepIdsOfEpisode } from "@/db/queries/materials";
+import { listStepTitlesByEpisode } from "@/db/queries/build";
 import { SEGMENT_KIND_LABELS } from "@/lib/script-timing";
 import { PrintButton } from "@/components/print-button";
 
@@ -10,7 +10,7 @@ export const metadata = { title: "Print script" };
 export default async function PrintPage({ params }: { params: Promise<{ channelId: string; episodeId: string }> }) {
   const { channelId, episodeId } = await params;
   const { episode } = await episodePage(channelId, episodeId, `/c/${channelId}/episodes/${episodeId}/script/print`);
-  const [view, steps] = await Promise.all([scriptViewFor(episode), stepIdsOfEpisode({ episodeId: episode.id })]);
+  const [view, steps] = await Promise.all([scriptViewFor(episode), listStepTitlesByEpisode({ episodeId: episode.id })]);
   const title = new Map(steps.map((s) => [s.id, s.title]));
   return (
     <article className="print-sheet bg-white p-6 text-[11pt] print:p-0">
