@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db, type Tx } from "../client";
-import { buildSteps, materials } from "../schema";
+import { materials } from "../schema";
 
 export async function listMaterialsByEpisode({ episodeId }: { episodeId: string }) {
   return db().select().from(materials).where(eq(materials.episodeId, episodeId)).orderBy(asc(materials.position), asc(materials.partName));

@@ -5,7 +5,7 @@ import { convertFrames, formatTimecode, framesToSeconds, rateOf } from "../../ti
 import { allowsDropFrame, type FrameRateId } from "../../frame-rate";
 import type { ScriptDto, SegmentDto } from "../../schemas/script";
 import type { Episode } from "../../../db/schema";
-import { listSegmentsByEpisode, type Segment } from "../../../db/queries/script";
+import { listSegmentsByEpisode, segmentSnapshot, type Segment } from "../../../db/queries/script";
 import { getUserById } from "../../../db/queries/users";
 
 export async function presenterWpm(episode: Episode): Promise<number> {
@@ -15,21 +15,7 @@ export async function presenterWpm(episode: Episode): Promise<number> {
 
 /** A segment as the API shows it (the shape of segmentSchema). */
 export function toSegmentDto(s: Segment): SegmentDto {
-  return {
-    id: s.id,
-    position: s.position,
-    kind: s.kind,
-    text: s.text,
-    stepId: s.stepId,
-    pinnedStartFrame: s.pinnedStartFrame,
-    explicitDurationFrames: s.explicitDurationFrames,
-    editorNotes: s.editorNotes,
-    chapterStart: s.chapterStart,
-    chapterTitle: s.chapterTitle,
-    version: s.version,
-    updatedBy: s.updatedBy,
-    updatedAt: s.updatedAt.toISOString(),
-  };
+  return { ...segmentSnapshot(s), updatedAt: s.updatedAt.toISOString() };
 }
 
 /** Segments with their computed timing, totals and chapters at a rate (the episode's unless asked). */
