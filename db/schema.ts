@@ -11,6 +11,7 @@
 import { sql } from "drizzle-orm";
 import {
   bigint,
+  type AnyPgColumn,
   boolean,
   check,
   date,
@@ -68,6 +69,10 @@ export const channels = pgTable("channels", {
   brollGapMs: integer("broll_gap_ms").notNull().default(2000),
   /** To-camera stretches longer than this without a cutaway are gaps (ms). */
   toCameraMaxMs: integer("to_camera_max_ms").notNull().default(20000),
+  /** IANA time zone of the workshop: shoot-day hours and calendar times are read in it. */
+  timeZone: text("time_zone").notNull().default("UTC"),
+  /** SHA-256 of the calendar feed's secret token (the token itself is shown once, when made). */
+  calendarTokenHash: text("calendar_token_hash"),
   createdAt: createdAt(),
   archivedAt: timestamp("archived_at", { withTimezone: true }),
 });
@@ -197,10 +202,14 @@ export const buildSteps = pgTable(
     failureNote: text("failure_note"),
     failurePhotoKey: text("failure_photo_key"),
     remedyOfStepId: uuid("remedy_of_step_id"),
+    /** Must the camera be there? Unfilmed steps (sanding off camera) may run between shoot days. */
+    mustFilm: boolean("must_film").notNull().default(true),
+    /** The shoot day the producer fixed this step to, if any. */
+    pinnedShootDayId: uuid("pinned_shoot_day_id").references((): AnyPgColumn => shootDays.id, { onDelete: "set null" }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index("build_steps_episode_idx").on(t.episodeId, t.position), index("build_steps_remedy_idx").on(t.remedyOfStepId)],
+  (t) => [index("build_steps_episode_idx").on(t.episodeId, t.position), index("build_steps_remedy_idx").on(t.remedyOfStepId), index("build_steps_pinned_day_idx").on(t.pinnedShootDayId)],
 );
 
 export const stepDependencies = pgTable(
@@ -288,42 +297,100 @@ export const scriptRevisions = pgTable(
 
 /* ───────────── shots, footage, coverage ───────────── */
 
+export const SHOOT_DAY_STATUS_LIST = ["planned", "confirmed", "shot", "cancelled"] as const;
+
 export const shootDays = pgTable(
   "shoot_days",
   {
     id: id(),
     channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
     episodeId: uuid("episode_id").references(() => episodes.id, { onDelete: "set null" }),
+    /** The calendar date in the channel's time zone. */
     day: date("day").notNull(),
     timeZone: text("time_zone").notNull().default("UTC"),
+    /** Call and wrap as instants (computed from the date, the hours and the zone, so daylight-saving days are right). */
     callAt: timestamp("call_at", { withTimezone: true }).notNull(),
     wrapAt: timestamp("wrap_at", { withTimezone: true }).notNull(),
     location: text("location").notNull().default(""),
+    equipmentNotes: text("equipment_notes").notNull().default(""),
+    safetyNotes: text("safety_notes").notNull().default(""),
+    weatherNote: text("weather_note").notNull().default(""),
+    contacts: text("contacts").notNull().default(""),
     notes: text("notes").notNull().default(""),
+    status: text("status").$type<(typeof SHOOT_DAY_STATUS_LIST)[number]>().notNull().default("planned"),
     callSheetSentAt: timestamp("call_sheet_sent_at", { withTimezone: true }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
   },
   (t) => [index("shoot_days_channel_day_idx").on(t.channelId, t.day), index("shoot_days_episode_idx").on(t.episodeId)],
 );
 
+/** Channel members on a shoot day, each with an optional own call time. */
 export const shootDayCrew = pgTable(
   "shoot_day_crew",
   {
     shootDayId: uuid("shoot_day_id").notNull().references(() => shootDays.id, { onDelete: "cascade" }),
     userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
-    available: boolean("available").notNull().default(true),
     duty: text("duty").notNull().default(""),
+    callAt: timestamp("call_at", { withTimezone: true }),
   },
   (t) => [primaryKey({ columns: [t.shootDayId, t.userId] }), index("shoot_day_crew_user_idx").on(t.userId)],
 );
 
+/** Named helpers from outside the channel (a friend on camera two, say). */
+export const shootDayHelpers = pgTable(
+  "shoot_day_helpers",
+  {
+    id: id(),
+    shootDayId: uuid("shoot_day_id").notNull().references(() => shootDays.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    duty: text("duty").notNull().default(""),
+    email: text("email"),
+    callAt: timestamp("call_at", { withTimezone: true }),
+  },
+  (t) => [index("shoot_day_helpers_day_idx").on(t.shootDayId)],
+);
+
+/** Dates a member cannot work, per channel. */
+export const daysAway = pgTable(
+  "days_away",
+  {
+    channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    day: date("day").notNull(),
+    note: text("note").notNull().default(""),
+  },
+  (t) => [primaryKey({ columns: [t.channelId, t.userId, t.day] }), index("days_away_channel_day_idx").on(t.channelId, t.day)],
+);
+
+/** The saved schedule of an episode: where each step sits (a shoot day, or off camera between days). */
 export const scheduledSteps = pgTable(
   "scheduled_steps",
   {
-    shootDayId: uuid("shoot_day_id").notNull().references(() => shootDays.id, { onDelete: "cascade" }),
-    stepId: uuid("step_id").notNull().references(() => buildSteps.id, { onDelete: "cascade" }),
+    stepId: uuid("step_id").primaryKey().references(() => buildSteps.id, { onDelete: "cascade" }),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    shootDayId: uuid("shoot_day_id").references(() => shootDays.id, { onDelete: "set null" }),
     startsAt: timestamp("starts_at", { withTimezone: true }).notNull(),
+    endsAt: timestamp("ends_at", { withTimezone: true }).notNull(),
+    plannedAt: timestamp("planned_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [primaryKey({ columns: [t.shootDayId, t.stepId] }), index("scheduled_steps_step_idx").on(t.stepId)],
+  (t) => [index("scheduled_steps_episode_idx").on(t.episodeId), index("scheduled_steps_day_idx").on(t.shootDayId)],
+);
+
+/** Every call sheet sent: to whom, and whether the mail went out (sent through the job queue). */
+export const callSheetSends = pgTable(
+  "call_sheet_sends",
+  {
+    id: id(),
+    shootDayId: uuid("shoot_day_id").notNull().references(() => shootDays.id, { onDelete: "cascade" }),
+    sentBy: uuid("sent_by").references(() => users.id, { onDelete: "set null" }),
+    recipients: text("recipients").array().notNull(),
+    status: text("status").$type<"queued" | "sent" | "failed">().notNull().default("queued"),
+    error: text("error"),
+    queuedAt: timestamp("queued_at", { withTimezone: true }).notNull().defaultNow(),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+  },
+  (t) => [index("call_sheet_sends_day_idx").on(t.shootDayId, t.queuedAt)],
 );
 
 export const gaps = pgTable(
@@ -621,3 +688,7 @@ export type Clip = typeof clips.$inferSelect;
 export type MailMessage = typeof mailMessages.$inferSelect;
 export type Gap = typeof gaps.$inferSelect;
 export type CoverageRange = typeof coverageRanges.$inferSelect;
+export type ShootDay = typeof shootDays.$inferSelect;
+export type ShootDayHelper = typeof shootDayHelpers.$inferSelect;
+export type ScheduledStep = typeof scheduledSteps.$inferSelect;
+export type CallSheetSend = typeof callSheetSends.$inferSelect;

@@ -42,17 +42,21 @@ function secs(frames: number, rate: Rate) {
 export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEditor(props, ref) {
   const { segment, index, timing, rate, steps, canWrite, canAnnotate, chapterProblems } = props;
   const { onDraft, onSaved, onState } = props;
+  const seenVersion = useRef(segment.version);
   const autosave = useSegmentAutosave(segment, {
     onDraft: (t) => onDraft(segment.id, t),
-    onSaved,
+    onSaved: (stored) => {
+      // Our own save: the pin field already shows what we saved (and may hold new typing).
+      seenVersion.current = Math.max(seenVersion.current, stored.version);
+      onSaved(stored);
+    },
     onState: (st) => onState(segment.id, st),
   });
   const { base, text, state, conflict, fieldError, setFieldError, save, flush: flushText } = autosave;
   const [pinText, setPinText] = useState(segment.pinnedStartFrame != null ? formatTimecode(segment.pinnedStartFrame, rate) : "");
   const area = useRef<HTMLTextAreaElement>(null);
-  const seenVersion = useRef(segment.version);
 
-  // A newer stored version arrives (someone else, or a structural change): its pin shows.
+  // A newer stored version from elsewhere (another writer, or a structural change): its pin shows.
   useEffect(() => {
     if (segment.version > seenVersion.current) {
       seenVersion.current = segment.version;

@@ -76,8 +76,19 @@ export function useSegmentAutosave(
     mutationFn: async (fields: SegmentFields): Promise<SegmentDto | null> => {
       if (conflictRef.current) return null;
       report("saving");
-      const { segment: stored } = await send<{ segment: SegmentDto }>(`/api/segments/${segment.id}`, "PATCH", { version: baseRef.current.version, ...fields });
-      return stored;
+      try {
+        const { segment: stored } = await send<{ segment: SegmentDto }>(`/api/segments/${segment.id}`, "PATCH", { version: baseRef.current.version, ...fields });
+        // Here, not in the caller: the next save in the scope may start before the caller hears of this one.
+        baseRef.current = stored;
+        return stored;
+      } catch (e) {
+        const err = e as ApiError;
+        if (err.status === 409 && err.current) {
+          const theirs = err.current as SegmentDto;
+          conflictRef.current = { theirs, mine: textRef.current, merged: proposeMerge(baseRef.current.text, textRef.current, theirs.text).text };
+        }
+        throw e;
+      }
     },
   });
   const { mutateAsync } = mutation;
@@ -89,7 +100,6 @@ export function useSegmentAutosave(
       try {
         const stored = await mutateAsync(fields);
         if (!stored) return null;
-        baseRef.current = stored;
         setBase(stored);
         optsRef.current.onSaved?.(stored);
         setFieldError(null);
@@ -98,8 +108,7 @@ export function useSegmentAutosave(
       } catch (e) {
         const err = e as ApiError;
         if (err.status === 409 && err.current) {
-          const theirs = err.current as SegmentDto;
-          setConflict({ theirs, mine: textRef.current, merged: proposeMerge(baseRef.current.text, textRef.current, theirs.text).text });
+          setConflict(conflictRef.current);
           report("conflict");
         } else if (err.status === 0) {
           report("offline");

@@ -109,6 +109,21 @@ describe("segment autosave", () => {
     expect(server.state.stored).toMatchObject({ version: 3, kind: "to_camera", pinnedStartFrame: 300 });
   });
 
+  it("a save queued behind another uses the version the first one stored, however the answers interleave", async () => {
+    const { result } = mount(seg());
+    let a!: Promise<unknown>, b!: Promise<unknown>, c!: Promise<unknown>;
+    act(() => {
+      a = result.current.save({ text: "Glue" });
+      b = result.current.save({ pinnedStartFrame: 1000 });
+      c = result.current.save({ kind: "to_camera" });
+    });
+    await act(async () => {
+      await Promise.all([a, b, c]);
+    });
+    expect(server.state.requests.map((r) => r.version)).toEqual([1, 2, 3]);
+    expect(result.current.state).not.toBe("conflict");
+  });
+
   it("sends words typed while a save was on its way right after it", async () => {
     const { result } = mount(seg());
     let release!: () => void;
