@@ -13,6 +13,7 @@ const LABELS: Record<string, string> = {
   currency: "Currency",
   brollGapMs: "B-roll gap",
   toCameraMaxMs: "To camera without a cutaway",
+  timeZone: "Workshop time zone",
 };
 
 type Settings = Omit<ChannelSettingsDto, "id">;
@@ -37,6 +38,8 @@ export function ChannelSettings({ channelId, initial, canEdit }: { channelId: st
           <dd>voice-over bare for more than <span className="num">{initial.brollGapMs / 1000} s</span></dd>
           <dt className="text-walnut-700">To camera without a cutaway</dt>
           <dd>for more than <span className="num">{initial.toCameraMaxMs / 1000} s</span></dd>
+          <dt className="text-walnut-700">Workshop time zone</dt>
+          <dd>{initial.timeZone}</dd>
         </dl>
         <p className="mt-3 text-walnut-700">Only the owner changes channel settings.</p>
       </div>
@@ -47,7 +50,7 @@ export function ChannelSettings({ channelId, initial, canEdit }: { channelId: st
       className="grid gap-3 rounded-plank border border-timber-300 bg-white p-4 sm:grid-cols-2"
       onSubmit={async (e) => {
         e.preventDefault();
-        const body = { name: f.name, units: f.units, currency: f.currency.toUpperCase(), brollGapMs: Math.round(Number(f.broll) * 1000), toCameraMaxMs: Math.round(Number(f.toCamera) * 1000) };
+        const body = { name: f.name, units: f.units, currency: f.currency.toUpperCase(), brollGapMs: Math.round(Number(f.broll) * 1000), toCameraMaxMs: Math.round(Number(f.toCamera) * 1000), timeZone: f.timeZone.trim() };
         try {
           await write(`/api/channels/${channelId}`, "PATCH", body);
         } catch (err) {
@@ -73,7 +76,7 @@ export function ChannelSettings({ channelId, initial, canEdit }: { channelId: st
         <option value="metric">Millimetres (metric)</option>
       </SelectField>
       <TextField label="Currency (ISO code)" disabled={!canEdit} value={f.currency} onChange={(e) => setF({ ...f, currency: e.target.value })} error={errors.currency?.[0]} />
-      <div />
+      <TextField label="Workshop time zone" hint="Shoot-day hours and calendars use it, e.g. Europe/Dublin." disabled={!canEdit} value={f.timeZone} onChange={(e) => setF({ ...f, timeZone: e.target.value })} error={errors.timeZone?.[0]} />
       <TextField
         label="B-roll gap: voice-over bare for more than (seconds)"
         hint="Common practice is about 2 s."

@@ -629,6 +629,8 @@ export const mailMessages = pgTable(
     channelId: uuid("channel_id"),
     kind: text("kind"),
     refId: uuid("ref_id"),
+    /** What was attached: name, type, size, SHA-256 and (when small) the bytes in base64. */
+    attachments: jsonb("attachments").$type<{ filename: string; contentType: string; size: number; sha256: string; base64: string | null }[]>().notNull().default(sql`'[]'::jsonb`),
     receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("mail_messages_received_idx").on(t.receivedAt), index("mail_messages_channel_idx").on(t.channelId, t.kind)],

@@ -25,7 +25,11 @@ export const ACTIONS = {
   "shots.edit": ["owner", "presenter", "producer", "editor"],
   "footage.manage": ["owner", "editor"],
   "coverage.manage": ["owner", "editor"],
+  // Shoot days, crew, the saved schedule, call sheets and the calendar feed.
   "schedule.edit": ["owner", "producer"],
+  // Everyone marks their own days away (and only their own).
+  "availability.own": ["owner", "presenter", "editor", "producer", "sponsor_liaison"],
+  "calendar.rotate": ["owner"],
   "sponsors.manage": ["owner", "sponsor_liaison"],
   "invoices.manage": ["owner", "sponsor_liaison"],
   "publish.edit": ["owner", "presenter", "editor"],

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { ROLES } from "../roles";
+import { timeZoneSchema } from "./shoot";
 
 export const emailSchema = z.string().trim().toLowerCase().pipe(z.email({ message: "must be an e-mail address" }));
 export const passwordSchema = z
@@ -42,6 +43,7 @@ export const channelUpdateSchema = z
     currency: z.string().regex(/^[A-Z]{3}$/, "use a 3-letter currency code such as USD"),
     brollGapMs: z.number().int("whole milliseconds").min(0, "cannot be negative").max(60_000, "at most 60 s"),
     toCameraMaxMs: z.number().int("whole milliseconds").min(1000, "at least 1 s").max(600_000, "at most 10 minutes"),
+    timeZone: timeZoneSchema,
   })
   .partial()
   .strict()
@@ -52,11 +54,20 @@ export const channelUpdateSchema = z
 
 export const channelSchema = z.object({ id: z.string(), name: z.string(), roles: z.array(z.enum(ROLES)), units: z.string(), currency: z.string() });
 export type ChannelDto = z.infer<typeof channelSchema>;
-export const channelSettingsSchema = z.object({ id: z.string(), name: z.string(), units: z.enum(["imperial", "metric"]), currency: z.string(), brollGapMs: z.number(), toCameraMaxMs: z.number() }).meta({ id: "ChannelSettings" });
+export const channelSettingsSchema = z.object({ id: z.string(), name: z.string(), units: z.enum(["imperial", "metric"]), currency: z.string(), brollGapMs: z.number(), toCameraMaxMs: z.number(), timeZone: z.string() }).meta({ id: "ChannelSettings" });
 export type ChannelSettingsDto = z.infer<typeof channelSettingsSchema>;
 export const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), joinedAt: z.string() });
 export type MemberDto = z.infer<typeof memberSchema>;
 export const invitationSchema = z.object({ id: z.string(), email: z.string(), roles: z.array(z.enum(ROLES)), expiresAt: z.string(), createdAt: z.string().optional() });
 export type InvitationDto = z.infer<typeof invitationSchema>;
-export const mailSchema = z.object({ id: z.string(), fromAddress: z.string(), toAddresses: z.array(z.string()), subject: z.string(), textBody: z.string(), receivedAt: z.string() });
+export const mailSchema = z.object({
+  id: z.string(),
+  kind: z.string().nullable(),
+  fromAddress: z.string(),
+  toAddresses: z.array(z.string()),
+  subject: z.string(),
+  textBody: z.string(),
+  attachments: z.array(z.object({ filename: z.string(), contentType: z.string(), size: z.number(), sha256: z.string() })),
+  receivedAt: z.string(),
+});
 export type MailDto = z.infer<typeof mailSchema>;

@@ -31,10 +31,12 @@ const stepFields = {
   dependsOn: ids,
   toolIds: ids,
   status: z.enum(STEP_STATUSES),
+  mustFilm: z.boolean(),
+  pinnedShootDayId: z.uuid({ message: "must be a valid shoot day id" }).nullable(),
 };
 
-/** Fields a producer may change on a step (durations, waits and crew). */
-export const TIMING_FIELDS = ["activeMinutes", "waitMinutes", "waitReason", "crewNeeded"] as const;
+/** Fields a producer may change on a step: durations, waits and crew, and how it is scheduled. */
+export const TIMING_FIELDS = ["activeMinutes", "waitMinutes", "waitReason", "crewNeeded", "mustFilm", "pinnedShootDayId"] as const;
 
 export const stepCreateSchema = z
   .object({
@@ -49,6 +51,8 @@ export const stepCreateSchema = z
     dependsOn: stepFields.dependsOn.default([]),
     toolIds: stepFields.toolIds.default([]),
     status: stepFields.status.default("planned"),
+    mustFilm: stepFields.mustFilm.default(true),
+    pinnedShootDayId: stepFields.pinnedShootDayId.default(null),
   })
   .strict()
   .meta({ id: "StepCreate" });
@@ -210,6 +214,8 @@ export const planStepSchema = z
     failureNote: z.string().nullable(),
     failurePhotoUrl: z.string().nullable(),
     remedyOfStepId: z.string().nullable(),
+    mustFilm: z.boolean(),
+    pinnedShootDayId: z.string().nullable(),
     /** Elapsed minutes from the first step, with enough people for everything. */
     timing: stepTimingSchema,
     /** The same chain with hands-on time counted against the team's people. */

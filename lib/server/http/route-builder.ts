@@ -20,6 +20,7 @@ import type { SessionUser } from "../access/session";
 import { loadClip, loadEpisode, loadMaterial, loadSegment, loadShot, loadStep, loadTool } from "../access/loaders";
 import { getGapById, getRangeById } from "../../../db/queries/coverage";
 import { getRevisionById } from "../../../db/queries/script";
+import { getShootDayById } from "../../../db/queries/shoot-days";
 
 async function channelOf(userId: string, rawId: string | undefined) {
   const channelId = parseId(rawId, "channel");
@@ -92,6 +93,7 @@ export const LOADERS = {
   gap: { param: "gapId", load: byChannelRow("gap", "gap", getGapById, (r) => ({ gap: r.gap })) },
   range: { param: "rangeId", load: byChannelRow("coverage range", "coverage range", getRangeById, (r) => ({ range: r.range })) },
   revision: { param: "revisionId", load: byChannelRow("revision", "revision", getRevisionById, (r) => ({ revision: r.revision })) },
+  shootDay: { param: "shootDayId", load: byChannelRow("shoot-day", "shoot day", getShootDayById, (r) => ({ shootDay: r })) },
 } as const;
 
 export type LoadKind = keyof typeof LOADERS;

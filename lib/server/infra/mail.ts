@@ -16,12 +16,12 @@ function transport(): Transporter {
 
 /** What sent a message: the local mail fake files it by these, so a channel's dev mailbox shows only its own mail. */
 export interface MailTag {
-  kind: "invitation" | "password_reset";
+  kind: "invitation" | "password_reset" | "call_sheet";
   channelId?: string;
   refId?: string;
 }
 
-export async function sendMail(msg: { to: string; subject: string; text: string; tag: MailTag }): Promise<void> {
+export async function sendMail(msg: { to: string | string[]; subject: string; text: string; tag: MailTag; attachments?: { filename: string; content: string; contentType: string }[] }): Promise<void> {
   const { tag, ...rest } = msg;
   const headers: Record<string, string> = { "X-Jigboard-Kind": tag.kind };
   if (tag.channelId) headers["X-Jigboard-Channel"] = tag.channelId;

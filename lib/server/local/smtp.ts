@@ -6,6 +6,7 @@
 import { SMTPServer } from "smtp-server";
 import { simpleParser, type AddressObject } from "mailparser";
 import pg from "pg";
+import crypto from "node:crypto";
 
 export interface LocalSmtp {
   url: string;
@@ -35,8 +36,15 @@ export async function startLocalSmtp(opts: { port: number; databaseUrl: string }
             return typeof v === "string" && /^[0-9a-f-]{36}$/i.test(v.trim()) ? v.trim() : null;
           };
           const kind = mail.headers.get("x-jigboard-kind");
+          const attachments = mail.attachments.map((a) => ({
+            filename: a.filename ?? "",
+            contentType: a.contentType,
+            size: a.content.length,
+            sha256: crypto.createHash("sha256").update(a.content).digest("hex"),
+            base64: a.content.length <= 256 * 1024 ? a.content.toString("base64") : null,
+          }));
           await pool.query(
-            "insert into mail_messages (from_address, to_addresses, subject, text_body, html_body, channel_id, kind, ref_id) values ($1, $2, $3, $4, $5, $6, $7, $8)",
+            "insert into mail_messages (from_address, to_addresses, subject, text_body, html_body, channel_id, kind, ref_id, attachments) values ($1, $2, $3, $4, $5, $6, $7, $8, $9)",
             [
               addresses(mail.from)[0] ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : ""),
               to.length ? to : envelopeTo,
@@ -46,6 +54,7 @@ export async function startLocalSmtp(opts: { port: number; databaseUrl: string }
               uuidHeader("x-jigboard-channel"),
               typeof kind === "string" ? kind.trim().slice(0, 40) : null,
               uuidHeader("x-jigboard-ref"),
+              JSON.stringify(attachments),
             ],
           );
           callback();

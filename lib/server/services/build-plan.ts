@@ -11,6 +11,7 @@ import { assertCan, type ChannelAccess } from "../access/access";
 import { AppError } from "../http/errors";
 import { db, type Tx } from "../../../db/client";
 import { lockEpisode } from "../../../db/queries/episode-lock";
+import { getShootDayById } from "../../../db/queries/shoot-days";
 import {
   addStepDependency,
   deleteStepRow,
@@ -28,12 +29,20 @@ import {
 interface PlanContext {
   steps: StepWithLinks[];
   channelToolIds: Set<string>;
+  channelId: string;
 }
 
 async function lockedPlan(tx: Tx, episodeId: string, channelId: string): Promise<PlanContext> {
   await lockEpisode(tx, episodeId);
   const [steps, channelToolIds] = await Promise.all([listStepsWithLinks(tx, episodeId), listActiveToolIds(tx, channelId)]);
-  return { steps, channelToolIds };
+  return { steps, channelToolIds, channelId };
+}
+
+/** A step may be pinned only to one of its channel's shoot days. */
+async function checkPin(channelId: string, pinnedShootDayId: string | null | undefined) {
+  if (!pinnedShootDayId) return;
+  const day = await getShootDayById({ id: pinnedShootDayId });
+  if (!day || day.channelId !== channelId) throw new AppError("unprocessable:step.pin", "That shoot day is not on this channel.", { fields: { pinnedShootDayId: ["not a shoot day of this channel"] } });
 }
 
 /** Refuses links to steps of other episodes, tools of other channels, and dependency loops (naming the loop). */
@@ -72,6 +81,7 @@ export function assertStepPatchAllowed(access: ChannelAccess, patch: StepUpdate)
 
 /** Adds a step at the end of the plan. */
 export async function addStep({ episodeId, channelId, input }: { episodeId: string; channelId: string; input: StepCreate }) {
+  await checkPin(channelId, input.pinnedShootDayId);
   if (input.status === "failed") {
     throw new AppError("unprocessable:step.status", "Add the step first, then mark it failed with what went wrong.", { fields: { status: ["mark a step failed through its failure form"] } });
   }
@@ -87,6 +97,7 @@ export async function addStep({ episodeId, channelId, input }: { episodeId: stri
 
 /** Adds a remedy right after a failed step; see placeRemedy for what it rewires. */
 export async function addRemedy({ failed, channelId, input }: { failed: { id: string; episodeId: string; status: string }; channelId: string; input: StepCreate }) {
+  await checkPin(channelId, input.pinnedShootDayId);
   if (failed.status !== "failed") throw new AppError("conflict:step.not-failed", "Only a failed step gets remedies. Mark it failed first.");
   return db().transaction(async (tx) => {
     const ctx = await lockedPlan(tx, failed.episodeId, channelId);
@@ -119,6 +130,7 @@ export async function editStep({
   if (patch.status === "failed") {
     throw new AppError("unprocessable:step.status", "Mark a step failed with its failure form, so the team knows what went wrong.", { fields: { status: ["use POST /api/steps/{stepId}/failure"] } });
   }
+  await checkPin(channelId, patch.pinnedShootDayId);
   // A step that leaves "failed" keeps its failure note: it is part of the build's story.
   return writeStep(episodeId, channelId, stepId, patch, (ctx) => checkLinks(ctx, stepId, patch.dependsOn, patch.toolIds));
 }

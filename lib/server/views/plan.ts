@@ -32,6 +32,8 @@ export async function planView(steps: StepWithLinks[], shelf: Tool[], team: numb
       failureNote: s.failureNote,
       failurePhotoUrl: s.failurePhotoKey ? await presignGet(s.failurePhotoKey) : null,
       remedyOfStepId: s.remedyOfStepId,
+      mustFilm: s.mustFilm,
+      pinnedShootDayId: s.pinnedShootDayId,
       timing: timing.steps[s.id]!,
       crewTiming: counted.steps[s.id]!,
     })),

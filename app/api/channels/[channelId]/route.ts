@@ -4,7 +4,7 @@ import { channelUpdateSchema } from "@/lib/schemas/account";
 import { getChannelById, updateChannel } from "@/db/queries/channels";
 import { recordAudit } from "@/db/queries/audit";
 
-const dto = (c: NonNullable<Awaited<ReturnType<typeof getChannelById>>>) => ({ id: c.id, name: c.name, units: c.units, currency: c.currency, brollGapMs: c.brollGapMs, toCameraMaxMs: c.toCameraMaxMs });
+const dto = (c: NonNullable<Awaited<ReturnType<typeof getChannelById>>>) => ({ id: c.id, name: c.name, units: c.units, currency: c.currency, brollGapMs: c.brollGapMs, toCameraMaxMs: c.toCameraMaxMs, timeZone: c.timeZone });
 
 export const GET = channelRoute({ load: "channel", action: "channel.read" }, async ({ channelId }) => {
   return json({ channel: dto((await getChannelById({ id: channelId }))!) });

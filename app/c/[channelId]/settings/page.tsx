@@ -12,7 +12,7 @@ export default async function SettingsPage({ params }: { params: Promise<{ chann
   return (
     <div className="mx-auto max-w-3xl space-y-4">
       <h1 className="text-xl font-bold">Channel settings</h1>
-      <ChannelSettings channelId={access.channelId} canEdit={can(access.roles, "members.manage")} initial={{ name: c.name, units: c.units, currency: c.currency, brollGapMs: c.brollGapMs, toCameraMaxMs: c.toCameraMaxMs }} />
+      <ChannelSettings channelId={access.channelId} canEdit={can(access.roles, "members.manage")} initial={{ name: c.name, units: c.units, currency: c.currency, brollGapMs: c.brollGapMs, toCameraMaxMs: c.toCameraMaxMs, timeZone: c.timeZone }} />
     </div>
   );
 }
