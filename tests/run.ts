@@ -74,11 +74,13 @@ async function main() {
     log: (m) => console.log(`[test] ${m}`),
   });
   let app: ReturnType<typeof spawn> | undefined;
+  let worker: ReturnType<typeof spawn> | undefined;
   const totals = { passed: 0, failed: 0 };
   const stop = async () => {
-    if (app?.pid) {
+    for (const c of [app, worker]) {
+      if (!c?.pid) continue;
       try {
-        process.kill(-app.pid, "SIGTERM");
+        process.kill(-c.pid, "SIGTERM");
       } catch {
         /* gone */
       }
@@ -120,6 +122,12 @@ async function main() {
       });
       await waitFor(`http://127.0.0.1:${appPort}/api/health`, 60_000);
       console.log(`[test] app on http://127.0.0.1:${appPort}`);
+      // The job worker, as npm start runs it: queued call sheets are mailed by it.
+      worker = spawn(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "--conditions=react-server", path.join(root, "lib", "server", "jobs", "worker.ts")], {
+        env: { ...env, JOB_POLL_SECONDS: "0.5" },
+        stdio: ["ignore", fs.openSync(path.join(artifacts, "worker.log"), "w"), fs.openSync(path.join(artifacts, "worker.err.log"), "w")],
+        detached: true,
+      });
     }
 
     if (want("static")) {

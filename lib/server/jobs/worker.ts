@@ -18,7 +18,7 @@ export { stopQueue as stopWorkers };
 
 const isMain = typeof process !== "undefined" && process.argv[1] && /jobs[\\/]worker\.ts$/.test(process.argv[1]);
 if (isMain) {
-  startWorkers()
+  startWorkers({ pollingIntervalSeconds: Number(process.env.JOB_POLL_SECONDS) || 2 })
     .then(() => console.log("[worker] taking jobs"))
     .catch((e) => {
       console.error("[worker] could not start:", (e as Error).message);

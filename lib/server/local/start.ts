@@ -20,15 +20,16 @@ const dev = process.argv.includes("--dev");
 
 async function main() {
   const services = await startLocalServices({ dataRoot, ports: LOCAL_PORTS, database: "jigboard" });
-  const running: { child?: ReturnType<typeof spawn> } = {};
+  const running: { child?: ReturnType<typeof spawn>; worker?: ReturnType<typeof spawn> } = {};
   let stopping = false;
   const shutdown = async (code = 0) => {
     if (stopping) return;
     stopping = true;
     console.log("\n[jigboard] stopping…");
-    if (running.child?.pid) {
+    for (const c of [running.child, running.worker]) {
+      if (!c?.pid) continue;
       try {
-        process.kill(-running.child.pid, "SIGTERM");
+        process.kill(-c.pid, "SIGTERM");
       } catch {
         /* already gone */
       }
@@ -82,6 +83,8 @@ async function main() {
   });
   running.child = child;
   child.on("exit", (code) => void shutdown(code ?? 0));
+  // The job worker (call-sheet mail) as its own process, as it would run in production.
+  running.worker = spawn(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "--conditions=react-server", path.join(root, "lib", "server", "jobs", "worker.ts")], { stdio: "inherit", env: childEnv, detached: true });
   console.log(`[jigboard] serving http://127.0.0.1:${port}`);
 }
 
