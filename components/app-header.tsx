@@ -28,6 +28,9 @@ export function AppHeader({
           <Link className={link} href={`/c/${channelId}`}>
             Episodes
           </Link>
+          <Link className={link} href={`/c/${channelId}/shoot-days`}>
+            Shoot days
+          </Link>
           <Link className={link} href={`/c/${channelId}/tools`}>
             Tool shelf
           </Link>

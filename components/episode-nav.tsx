@@ -10,6 +10,7 @@ export function EpisodeNav({ base }: { base: string }) {
     { href: `${base}/cut-list`, label: "Cut list" },
     { href: `${base}/script`, label: "Script" },
     { href: `${base}/shots`, label: "Shot list" },
+    { href: `${base}/schedule`, label: "Schedule" },
     { href: `${base}/footage`, label: "Footage" },
     { href: `${base}/coverage`, label: "B-roll coverage" },
   ];

@@ -54,7 +54,7 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>, opts: SeedOpti
 
   const hash = await bcrypt.hash(DEMO_PASSWORD, 10);
   await db.transaction(async (tx) => {
-    const [channel] = await tx.insert(schema.channels).values({ name: "Crooked Kerf Workshop", currency: "USD" }).returning();
+    const [channel] = await tx.insert(schema.channels).values({ name: "Crooked Kerf Workshop", currency: "USD", timeZone: "Europe/Dublin" }).returning();
     const [outsiderChannel] = await tx.insert(schema.channels).values({ name: "Outlier Joinery", currency: "EUR", units: "metric" }).returning();
     if (!channel || !outsiderChannel) throw new Error("seed: channel insert failed");
 
@@ -90,6 +90,7 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>, opts: SeedOpti
     const stepIds = await seedBuildPlans(tx, channel.id, episodeIds);
     await seedScripts(tx, episodeIds, stepIds, ids["presenter@jigboard.example"]!);
     await seedShotsAndFootage(tx, channel.id, episodeIds, stepIds, ids["editor@jigboard.example"]!, opts);
+    await seedShootDays(tx, channel.id, episodeIds, stepIds, ids);
     await tx.insert(schema.episodes).values({
       channelId: outsiderChannel.id,
       title: "Hall bench in steamed beech",
@@ -214,7 +215,7 @@ async function seedBuildPlans(tx: SeedTx, channelId: string, episodeIds: Record<
   await plan(
     "Walnut side table with a floating top",
     [
-      { key: "acclimate", title: "Sticker the walnut in the shop", active: 20, wait: 3 * 1440, reason: "acclimatise to shop humidity", cover: ["broll"] },
+      { key: "acclimate", title: "Sticker the walnut in the shop", active: 20, wait: 3 * 1440, reason: "acclimatise to shop humidity", cover: ["broll"], status: "done" },
       { key: "mill", title: "Mill legs, aprons and top to size", active: 150, deps: ["acclimate"], tools: ["tablesaw", "planer"], cover: ["to_camera", "broll", "slow_motion"] },
       { key: "bridles", title: "Cut the bridle joints", active: 180, deps: ["mill"], tools: ["tablesaw", "chisels"], cover: ["close_up", "overhead"] },
       { key: "glue", title: "Glue up the base", active: 40, wait: 24 * 60, reason: "glue cure before unclamping", deps: ["bridles"], tools: ["clamps"], crew: 2, cover: ["time_lapse", "broll"] },
@@ -373,4 +374,48 @@ async function seedShotsAndFootage(tx: SeedTx, channelId: string, episodeIds: Re
     }
   }
   await tx.insert(schema.gaps).values({ episodeId, source: "marked", status: "open", startFrame: Math.round(100 * 29.97), endFrame: Math.round(106 * 29.97), note: "Need a wide of the whole bench before assembly" });
+}
+
+/**
+ * Invented shoot days in December 2026 (Dublin time, GMT then): the walnut
+ * table's glue-up cures overnight, so its build needs a second day; the
+ * editor is away on the Sunday; a friend helps on camera two. The saved
+ * schedule below is what the scheduler gives for these steps (worked by
+ * hand: mill, bridles and the glue-up first, so the cure starts early).
+ */
+async function seedShootDays(tx: SeedTx, channelId: string, episodeIds: Record<string, string>, stepIds: Record<string, Record<string, string>>, users: Record<string, string>) {
+  const table = episodeIds["Walnut side table with a floating top"]!;
+  const stool = episodeIds["Shaker-style step stool"]!;
+  const utc = (date: string, hhmm: string) => new Date(`${date}T${hhmm}:00Z`);
+  const day = async (v: { date: string; call: string; wrap: string; episodeId: string; location: string; status?: "planned" | "confirmed" | "shot"; crew: [string, string][]; helpers?: { name: string; duty: string; email: string }[]; equipment?: string; safety?: string; weather?: string }) => {
+    const [row] = await tx
+      .insert(schema.shootDays)
+      .values({ channelId, episodeId: v.episodeId, day: v.date, timeZone: "Europe/Dublin", callAt: utc(v.date, v.call), wrapAt: utc(v.date, v.wrap), location: v.location, status: v.status ?? "confirmed", equipmentNotes: v.equipment ?? "", safetyNotes: v.safety ?? "", weatherNote: v.weather ?? "", contacts: "Dev Halloran (producer) for changes on the day." })
+      .returning();
+    for (const [email, duty] of v.crew) await tx.insert(schema.shootDayCrew).values({ shootDayId: row!.id, userId: users[email]!, duty });
+    for (const h of v.helpers ?? []) await tx.insert(schema.shootDayHelpers).values({ shootDayId: row!.id, ...h });
+    return row!.id;
+  };
+  const crew: [string, string][] = [
+    ["presenter@jigboard.example", "on camera, at the bench"],
+    ["producer@jigboard.example", "camera one, sound"],
+  ];
+  const sat = await day({ date: "2026-12-12", call: "09:00", wrap: "17:00", episodeId: table, location: "Main shop, bench two", crew: [...crew, ["editor@jigboard.example", "data wrangling"]], helpers: [{ name: "Rowan Vale", duty: "camera two (overhead)", email: "rowan.vale@helpers.example" }], equipment: "Two cameras, overhead rig, lav mic, LED panels; clamps laid out the night before.", safety: "Riving knife on for all rips; the dust extractor runs whenever the planer does.", weather: "Shop heater on by 08:00 so the glue is above 15 °C." });
+  const sun = await day({ date: "2026-12-13", call: "09:00", wrap: "18:00", episodeId: table, location: "Main shop, bench two", crew, equipment: "One camera, lav mic, time-lapse camera for the oil coats.", safety: "Oily rags flat on the rack outside, then into the metal bin with water." });
+  await day({ date: "2026-12-05", call: "10:00", wrap: "15:00", episodeId: stool, location: "Main shop", crew, status: "shot" });
+  await tx.insert(schema.daysAway).values([
+    { channelId, userId: users["editor@jigboard.example"]!, day: "2026-12-13", note: "family visit" },
+    { channelId, userId: users["sponsors@jigboard.example"]!, day: "2026-12-12", note: "trade show" },
+    { channelId, userId: users["presenter@jigboard.example"]!, day: "2026-12-19", note: "" },
+  ]);
+  const s = stepIds["Walnut side table with a floating top"]!;
+  const plan: [string, string, string, string, string][] = [
+    ["mill", sat, "2026-12-12", "09:00", "11:30"],
+    ["bridles", sat, "2026-12-12", "11:30", "14:30"],
+    ["glue", sat, "2026-12-12", "14:30", "15:10"],
+    ["top", sat, "2026-12-12", "15:10", "16:40"],
+    ["fit", sun, "2026-12-13", "15:10", "16:25"],
+    ["oil", sun, "2026-12-13", "16:25", "17:10"],
+  ];
+  for (const [key, dayId, date, from, to] of plan) await tx.insert(schema.scheduledSteps).values({ stepId: s[key]!, episodeId: table, shootDayId: dayId, startsAt: utc(date, from), endsAt: utc(date, to) });
 }

@@ -54,6 +54,8 @@ export interface ScheduleDay {
   /** Members on the crew (ids), and named helpers from outside. */
   crew: string[];
   helpers: number;
+  /** Time already taken on this day (another episode's saved steps). */
+  taken?: [number, number][];
 }
 
 export interface ScheduleInput {
@@ -105,6 +107,7 @@ export interface Schedule {
 }
 
 interface Window {
+  taken?: [number, number][];
   dayId: string | null;
   date: string;
   start: number;
@@ -147,7 +150,7 @@ function windowsFor(input: ScheduleInput): { shoot: Window[]; off: Window[] } {
   const awayOn = new Map<string, Set<string>>();
   for (const a of input.away) (awayOn.get(a.date) ?? awayOn.set(a.date, new Set()).get(a.date)!).add(a.userId);
   const shoot = input.days
-    .map((d) => ({ dayId: d.id, date: d.date, start: d.start, end: d.end, people: d.crew.filter((u) => !awayOn.get(d.date)?.has(u)).length + d.helpers, shoot: true }))
+    .map((d) => ({ dayId: d.id, date: d.date, start: d.start, end: d.end, people: d.crew.filter((u) => !awayOn.get(d.date)?.has(u)).length + d.helpers, shoot: true, taken: d.taken }))
     .sort((a, b) => a.start - b.start || a.dayId!.localeCompare(b.dayId!));
   const off: Window[] = [];
   const hoursOff = input.offCameraHours === undefined ? OFF_CAMERA_HOURS : input.offCameraHours;
@@ -242,7 +245,7 @@ function run(order: string[], ctx: Ctx): Attempt {
     for (const w of windows) {
       if (w.end <= ready.at || w.people < Math.max(1, step.crewNeeded)) continue;
       if ((w.end - w.start) / MIN < step.activeMinutes) continue;
-      const b = busy.get(w) ?? [];
+      const b = busy.get(w) ?? [...(w.taken ?? [])].sort((x, y) => x[0] - y[0]);
       const start = earliestGap(b, w, ready.at, step.activeMinutes);
       if (start == null) continue;
       const end = start + step.activeMinutes * MIN;
@@ -400,17 +403,50 @@ function explain(r: Refusal, ctx: Ctx): string {
   }
 }
 
+/** Subsets of `items` of a given size, in order. */
+function* subsets<T>(items: T[], size: number, from = 0, acc: T[] = []): Generator<T[]> {
+  if (acc.length === size) {
+    yield [...acc];
+    return;
+  }
+  for (let i = from; i <= items.length - (size - acc.length); i++) {
+    acc.push(items[i]!);
+    yield* subsets(items, size, i + 1, acc);
+    acc.pop();
+  }
+}
+
+/** How many schedule runs the exact search may spend looking for fewer shoot days. */
+const DAY_SEARCH_BUDGET = 150_000;
+
 function best(ctx: Ctx, steps: ScheduleStep[]): { attempt: Attempt; method: Schedule["method"] } {
   const active = steps.filter((s) => !s.settled);
-  if (active.length <= EXACT_LIMIT) {
-    let top: Attempt | null = null;
-    for (const order of topologicalOrders(active)) {
-      const a = run(order, ctx);
-      if (!top || better(a.score, top.score)) top = a;
-    }
-    return { attempt: top ?? run([], ctx), method: "exact" };
+  if (active.length > EXACT_LIMIT) return { attempt: run(greedyOrder(ctx, active), ctx), method: "greedy" };
+  const orders = [...topologicalOrders(active)];
+  let top: Attempt | null = null;
+  for (const order of orders) {
+    const a = run(order, ctx);
+    if (!top || better(a.score, top.score)) top = a;
   }
-  return { attempt: run(greedyOrder(ctx, active), ctx), method: "greedy" };
+  if (!top) return { attempt: run([], ctx), method: "exact" };
+  // Each step goes to its earliest room, which can spread work over more days than needed:
+  // look for the same finish on fewer shoot days, smallest sets first.
+  let budget = DAY_SEARCH_BUDGET;
+  const used = top.score[2];
+  for (let size = 1; size < used && budget > 0; size++) {
+    let found: Attempt | null = null;
+    for (const shoot of subsets(ctx.shoot, size)) {
+      if (budget <= 0) break;
+      const sub: Ctx = { ...ctx, shoot };
+      for (const order of orders) {
+        if (--budget <= 0) break;
+        const a = run(order, sub);
+        if (a.score[0] === top.score[0] && a.score[1] === top.score[1] && (!found || better(a.score, found.score))) found = a;
+      }
+    }
+    if (found) return { attempt: found, method: "exact" };
+  }
+  return { attempt: top, method: "exact" };
 }
 
 function context(input: ScheduleInput): Ctx {
@@ -490,4 +526,9 @@ export function changes(before: { stepId: string; dayId: string | null; start: n
   }
   for (const o of before) if (!seen.has(o.stepId)) out.push({ stepId: o.stepId, from: { dayId: o.dayId, start: o.start }, to: null });
   return out;
+}
+
+/** Today's date in a zone. */
+export function todayIn(timeZone: string, now: number = Date.now()): string {
+  return zonedParts(now, timeZone).date;
 }

@@ -118,6 +118,15 @@ export async function replaceScheduledSteps(tx: Tx, episodeId: string, rows: { s
   if (rows.length) await tx.insert(scheduledSteps).values(rows.map((r) => ({ ...r, episodeId })));
 }
 
+/** Saved steps on these days that belong to other episodes (their time is taken). */
+export async function listTakenOnDays(q: Q, dayIds: string[], exceptEpisodeId: string) {
+  if (!dayIds.length) return [];
+  return q
+    .select({ shootDayId: scheduledSteps.shootDayId, startsAt: scheduledSteps.startsAt, endsAt: scheduledSteps.endsAt })
+    .from(scheduledSteps)
+    .where(and(inArray(scheduledSteps.shootDayId, dayIds), ne(scheduledSteps.episodeId, exceptEpisodeId)));
+}
+
 /** Steps of any episode saved on a shoot day, in time order (the call sheet's running order). */
 export async function listScheduledOnDay({ shootDayId }: { shootDayId: string }) {
   return db()

@@ -76,6 +76,12 @@ describe("worked examples (invented scenario; expected values worked by hand)", 
     expect(a.dayId).not.toBe(b.dayId);
   });
 
+  it("leaves time another episode already holds on a shared day", () => {
+    const d = { ...day("sat", "2026-12-12"), taken: [[at("2026-12-12", "09:00"), at("2026-12-12", "12:00")]] as [number, number][] };
+    const s = schedule(base([step("a", 60)], [d]));
+    expect(local(placed(s, "a").start)).toBe("2026-12-12 12:00");
+  });
+
   it("a pinned step stays on its day, even when an earlier day has room", () => {
     const s = schedule(base([step("a", 60, { pinnedDayId: "sun" })], [day("sat", "2026-12-12"), day("sun", "2026-12-13")]));
     expect(placed(s, "a").dayId).toBe("sun");

@@ -26,6 +26,7 @@ import {
   listMemberIds,
   listScheduledSteps,
   listShootDaysByChannel,
+  listTakenOnDays,
   lockChannelForDays,
   memberIdsOf,
   removeDaysAway,
@@ -117,9 +118,11 @@ export async function scheduleInput(episode: Episode): Promise<{ input: Schedule
     listScheduledSteps(db(), episode.id),
     getChannelById({ id: episode.channelId }).then((c) => c!),
   ]);
-  const days = allDays.filter((d) => d.status === "planned" || d.status === "confirmed");
+  // This episode's days and days not tied to any episode; time other episodes already saved there is taken.
+  const days = allDays.filter((d) => (d.status === "planned" || d.status === "confirmed") && (d.episodeId === episode.id || d.episodeId === null));
   const crew = await listCrewByDays(db(), days.map((d) => d.id));
   const helpers = await listHelpersByDays(db(), days.map((d) => d.id));
+  const taken = await listTakenOnDays(db(), days.map((d) => d.id), episode.id);
   const tz = channel.timeZone;
   const input: ScheduleInput = {
     steps: steps.map((s) => ({
@@ -142,6 +145,7 @@ export async function scheduleInput(episode: Episode): Promise<{ input: Schedule
       end: d.wrapAt.getTime(),
       crew: crew.filter((c) => c.shootDayId === d.id).map((c) => c.userId),
       helpers: helpers.filter((h) => h.shootDayId === d.id).length,
+      taken: taken.filter((t) => t.shootDayId === d.id).map((t) => [t.startsAt.getTime(), t.endsAt.getTime()] as [number, number]),
     })),
     members,
     away: away.map((a) => ({ userId: a.userId, date: a.date })),

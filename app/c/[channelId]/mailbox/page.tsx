@@ -28,7 +28,7 @@ export default async function MailboxPage({ params }: { params: Promise<{ channe
     <div className="mx-auto max-w-3xl space-y-4">
       <h1 className="text-xl font-bold">Dev mailbox</h1>
       <p className="text-sm text-walnut-700">Everything the local mail server received, newest first. Only on machines running the local services.</p>
-      {messages.length === 0 ? <p className="rounded-plank border border-dashed border-timber-400 p-4 text-sm">No mail yet. Invite someone or ask for a password reset, and the message shows up here.</p> : null}
+      {messages.length === 0 ? <p className="rounded-plank border border-dashed border-timber-400 p-4 text-sm">No mail yet. Invite someone or send a call sheet, and the message shows up here.</p> : null}
       <ol className="space-y-3">
         {messages.map((m) => (
           <li key={m.id} className="rounded-plank border border-timber-300 bg-white p-3" data-testid="mail-message">
@@ -37,6 +37,11 @@ export default async function MailboxPage({ params }: { params: Promise<{ channe
             </p>
             <h2 className="font-medium">{m.subject}</h2>
             <pre className="mt-2 whitespace-pre-wrap font-sans text-sm">{linkify(m.textBody)}</pre>
+            {m.attachments.length ? (
+              <p className="mt-2 text-xs text-walnut-700" data-testid="mail-attachments">
+                Attached: {m.attachments.map((a) => `${a.filename} (${a.contentType.split(";")[0]}, ${a.size} bytes)`).join(", ")}
+              </p>
+            ) : null}
           </li>
         ))}
       </ol>
