@@ -391,7 +391,7 @@ function explain(r: Refusal, ctx: Ctx): string {
     case "crew":
       return `${title(r.stepId)} needs ${r.needed} ${r.needed === 1 ? "person" : "people"}, but no ${s.mustFilm ? "shoot day" : "day"} has more than ${r.most} on hand who are not away. Add crew or helpers to a day.`;
     case "pinned_gone":
-      return `${title(r.stepId)} is pinned to a shoot day that was cancelled or removed. Pin it to another day or unpin it.`;
+      return `${title(r.stepId)} is pinned to a shoot day this episode cannot use (cancelled, removed, already shot or set aside for another episode). Pin it to another day or unpin it.`;
     case "pinned_too_early":
       return `${title(r.stepId)} is pinned to ${dayName(r.dayId)}, but it cannot start before ${formatWhen(r.readyAt, tz)}${after(r.waitedOn)}. Pin it to a later day or unpin it.`;
     case "pinned_full":

@@ -38,7 +38,8 @@ export function ScheduleView({ episodeId, channelId, canPlan }: { episodeId: str
     const k = p.dayId ?? `off:${p.date ?? "none"}`;
     groups.set(k, [...(groups.get(k) ?? []), p]);
   }
-  const upcoming = allDays.filter((d) => d.status !== "cancelled");
+  // Days this episode can use: its own and those not tied to any episode.
+  const upcoming = allDays.filter((d) => d.status !== "cancelled" && (d.episodeId === episodeId || d.episodeId === null));
 
   return (
     <div className="space-y-4">

@@ -58,6 +58,9 @@ const refRetime = best(() => {
 console.log(JSON.stringify({ bench: "retime 2,000 segments with timecodes", oursMs: +oursRetime.toFixed(2), withReferenceFormattingMs: +refRetime.toFixed(2), ratio: +(oursRetime / refRetime).toFixed(3) }));
 if (sink === 42) console.log("");
 
+const { scheduleBench } = await import("./schedule");
+scheduleBench();
+
 // The footage upload benchmark starts its own services and app.
 const { uploadBench } = await import("./upload");
 await uploadBench();
