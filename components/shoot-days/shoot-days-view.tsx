@@ -43,11 +43,12 @@ function DayChip({ day, canPlan, episodes, onOpen }: { day: ShootDayDto; canPlan
       data-testid="shoot-day-chip"
     >
       {canPlan ? (
-        <button type="button" className="cursor-grab px-1 text-walnut-600" aria-label={`Drag the shoot day on ${dayLabel(day.date)} to another date`} {...attributes} {...listeners}>
+        // On a phone the cell is too narrow for two targets: the date is changed in the form there.
+        <button type="button" className="hidden cursor-grab px-1 text-walnut-600 sm:block" aria-label={`Drag the shoot day on ${dayLabel(day.date)} to another date`} {...attributes} {...listeners}>
           ⠿
         </button>
       ) : null}
-      <button type="button" onClick={onOpen} className="min-w-0 flex-1 px-1 py-0.5 text-left">
+      <button type="button" onClick={onOpen} className="min-h-6 min-w-6 flex-1 px-1 py-0.5 text-left">
         <span className="num block">
           {day.callTime}–{day.wrapTime}
         </span>
