@@ -83,4 +83,20 @@ test("producer schedules a build around a glue-up, sends the call sheet, and the
   for (let i = 0; i < 30 && !(await page.getByRole("heading", { name: "Week of 5 Apr 2027" }).isVisible()); i++) await page.getByRole("button", { name: "Later" }).click();
   await expect(page.getByTestId("week-view")).toContainText(title);
   await shot(page, "shoot-days-week");
+
+  // Drag Sunday's day to Monday in the month view; its hours go with it.
+  await page.getByRole("radio", { name: "Month" }).click();
+  await expect(page.getByRole("heading", { name: "April 2027" })).toBeVisible();
+  const handle = page.getByRole("button", { name: "Drag the shoot day on Sun 11 Apr to another date" });
+  const target = page.locator('[data-date="2027-04-12"]');
+  const from = (await handle.boundingBox())!;
+  const to = (await target.boundingBox())!;
+  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(from.x + 20, from.y + 10, { steps: 4 });
+  await page.mouse.move(to.x + to.width / 2, to.y + to.height / 2, { steps: 10 });
+  await page.mouse.up();
+  await expect(page.getByRole("status").filter({ hasText: "Moved the shoot day from Sun 11 Apr to Mon 12 Apr" })).toBeVisible();
+  await expect(target.getByTestId("shoot-day-chip")).toContainText("09:00–17:00");
+  await shot(page, "shoot-days-month");
 });

@@ -195,3 +195,28 @@ describe("calendar feed", () => {
     expect((await get("not-a-real-token-at-all-xx")).status).toBe(404);
   });
 });
+
+describe("the mail queue when the mail server is down", () => {
+  it("keeps the send queued with the reason, leaves the job to be retried, and delivers once mail works again", async () => {
+    const { deliverCallSheet } = await import("@/lib/server/jobs/call-sheets");
+    const { CALL_SHEET_RETRY } = await import("@/lib/server/jobs/queue");
+    const nodemailer = (await import("nodemailer")).default;
+    const day = (await newDay({ date: "2027-03-20", crew: [{ userId: w.members.presenter.id }] })).json.shootDay;
+    const [send] = await db().insert(callSheetSends).values({ shootDayId: day.id, sentBy: w.members.producer.id, recipients: [w.members.presenter.email] }).returning();
+    const g = globalThis as unknown as { __jigboardMail?: unknown };
+    const working = g.__jigboardMail;
+    // A mail server that is not there (nothing listens on port 9 here).
+    g.__jigboardMail = nodemailer.createTransport({ host: "127.0.0.1", port: 9, connectionTimeout: 500 });
+    await expect(deliverCallSheet(send!.id)).rejects.toThrow();
+    const queued = (await db().select().from(callSheetSends).where(eq(callSheetSends.id, send!.id)))[0]!;
+    expect(queued.status).toBe("queued");
+    expect(queued.error).toMatch(/not sent yet, will retry/);
+    // pg-boss retries a thrown job: ten tries with growing delays (the queue's policy).
+    expect(CALL_SHEET_RETRY).toEqual({ retryLimit: 10, retryDelay: 20, retryBackoff: true });
+    g.__jigboardMail = working;
+    expect(await deliverCallSheet(send!.id)).toBe("sent");
+    expect((await db().select().from(callSheetSends).where(eq(callSheetSends.id, send!.id)))[0]!.status).toBe("sent");
+    // Delivered once: a second run changes nothing.
+    expect(await deliverCallSheet(send!.id)).toBe("gone");
+  }, 20_000);
+});
