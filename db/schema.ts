@@ -35,6 +35,7 @@ import type { PricingUnit } from "../lib/materials";
 import type { SegmentKind } from "../lib/script-timing";
 import type { ShotKind, ShotStatus } from "../lib/schemas/footage";
 import type { CoverageKind } from "../lib/shot-kinds";
+import type { DealKind, DeliverableKind } from "../lib/sponsor-checks";
 
 const id = () => uuid("id").primaryKey().defaultRandom();
 const createdAt = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
@@ -518,6 +519,9 @@ export const sponsors = pgTable(
     id: id(),
     channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
     name: text("name").notNull(),
+    website: text("website").notNull().default(""),
+    notes: text("notes").notNull().default(""),
+    /** The main contact (more in sponsor_contacts). */
     contactName: text("contact_name").notNull().default(""),
     contactEmail: text("contact_email").notNull().default(""),
     createdAt: createdAt(),
@@ -526,45 +530,79 @@ export const sponsors = pgTable(
   (t) => [index("sponsors_channel_idx").on(t.channelId)],
 );
 
+export const sponsorContacts = pgTable(
+  "sponsor_contacts",
+  {
+    id: id(),
+    sponsorId: uuid("sponsor_id").notNull().references(() => sponsors.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    email: text("email").notNull(),
+  },
+  (t) => [index("sponsor_contacts_sponsor_idx").on(t.sponsorId)],
+);
+
+export const DEAL_STATUS_LIST = ["proposed", "signed", "in_review", "approved", "delivered", "invoiced", "paid", "cancelled"] as const;
+
 export const deals = pgTable(
   "deals",
   {
     id: id(),
     channelId: uuid("channel_id").notNull().references(() => channels.id, { onDelete: "cascade" }),
     sponsorId: uuid("sponsor_id").notNull().references(() => sponsors.id, { onDelete: "cascade" }),
+    /** The first episode of the deal; all of them in deal_episodes. */
     episodeId: uuid("episode_id").references(() => episodes.id, { onDelete: "set null" }),
     title: text("title").notNull(),
+    kind: text("kind").$type<DealKind>().notNull().default("paid_integration"),
     feeMinor: integer("fee_minor").notNull().default(0),
     currency: text("currency").notNull().default("USD"),
-    /** proposed | signed | delivered | approved | invoiced | paid | cancelled */
-    status: text("status").notNull().default("proposed"),
+    signedOn: date("signed_on"),
+    scriptDue: date("script_due"),
+    reviewDue: date("review_due"),
+    publishFrom: date("publish_from"),
+    publishTo: date("publish_to"),
+    /** For a loaned tool: when it goes back. */
+    returnBy: date("return_by"),
+    status: text("status").$type<(typeof DEAL_STATUS_LIST)[number]>().notNull().default("proposed"),
+    notes: text("notes").notNull().default(""),
     createdAt: createdAt(),
+    updatedAt: updatedAt(),
     archivedAt: timestamp("archived_at", { withTimezone: true }),
   },
   (t) => [index("deals_channel_idx").on(t.channelId), index("deals_sponsor_idx").on(t.sponsorId), index("deals_episode_idx").on(t.episodeId)],
 );
 
+export const dealEpisodes = pgTable(
+  "deal_episodes",
+  {
+    dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.dealId, t.episodeId] }), index("deal_episodes_episode_idx").on(t.episodeId)],
+);
+
+export const dealTools = pgTable(
+  "deal_tools",
+  {
+    dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
+    toolId: uuid("tool_id").notNull().references(() => tools.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.dealId, t.toolId] }), index("deal_tools_tool_idx").on(t.toolId)],
+);
+
+/** One checkable promise of a deal (see lib/sponsor-checks.ts for the kinds). */
 export const deliverables = pgTable(
   "deliverables",
   {
     id: id(),
     dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
-    segmentId: uuid("segment_id").references(() => scriptSegments.id, { onDelete: "set null" }),
-    /** Placement window on the episode timeline, in seconds from the start. */
-    windowStartSeconds: integer("window_start_seconds"),
-    windowEndSeconds: integer("window_end_seconds"),
-    minSeconds: integer("min_seconds"),
-    maxSeconds: integer("max_seconds"),
-    disclosureRequired: boolean("disclosure_required").notNull().default(true),
-    disclosureText: text("disclosure_text").notNull().default(""),
-    linkUrl: text("link_url"),
-    creditText: text("credit_text").notNull().default(""),
-    /** pending | approved | changes_requested */
-    reviewStatus: text("review_status").notNull().default("pending"),
-    reviewNote: text("review_note").notNull().default(""),
-    reviewedAt: timestamp("reviewed_at", { withTimezone: true }),
+    kind: text("kind").$type<DeliverableKind>().notNull(),
+    seconds: integer("seconds"),
+    phrases: text("phrases").array().notNull().default(sql`'{}'::text[]`),
+    url: text("url"),
+    position: integer("position").notNull().default(0),
+    createdAt: createdAt(),
   },
-  (t) => [index("deliverables_deal_idx").on(t.dealId), index("deliverables_segment_idx").on(t.segmentId)],
+  (t) => [index("deliverables_deal_idx").on(t.dealId)],
 );
 
 export const guestLinks = pgTable(
@@ -573,11 +611,30 @@ export const guestLinks = pgTable(
     id: id(),
     dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
     tokenHash: text("token_hash").notNull(),
+    contactEmail: text("contact_email").notNull().default(""),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("guest_links_token_key").on(t.tokenHash), index("guest_links_deal_idx").on(t.dealId)],
+);
+
+/** The review thread of a deal: the sponsor's decisions and comments, and the team's replies. */
+export const reviewComments = pgTable(
+  "review_comments",
+  {
+    id: id(),
+    dealId: uuid("deal_id").notNull().references(() => deals.id, { onDelete: "cascade" }),
+    guestLinkId: uuid("guest_link_id").references(() => guestLinks.id, { onDelete: "set null" }),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),
+    decision: text("decision").$type<"approved" | "changes_requested">(),
+    body: text("body").notNull().default(""),
+    /** Which script the decision was about: a fingerprint of the deal's segments and their versions. */
+    scriptFingerprint: text("script_fingerprint").notNull().default(""),
+    createdAt: createdAt(),
+  },
+  (t) => [index("review_comments_deal_idx").on(t.dealId, t.createdAt)],
 );
 
 export const invoices = pgTable(
@@ -588,14 +645,23 @@ export const invoices = pgTable(
     amountMinor: integer("amount_minor").notNull(),
     currency: text("currency").notNull(),
     providerId: text("provider_id"),
+    providerCustomerId: text("provider_customer_id"),
+    hostedUrl: text("hosted_url"),
     /** draft | open | paid | void */
-    status: text("status").notNull().default("draft"),
+    status: text("status").$type<"draft" | "open" | "paid" | "void">().notNull().default("draft"),
     issuedAt: timestamp("issued_at", { withTimezone: true }),
     paidAt: timestamp("paid_at", { withTimezone: true }),
     createdAt: createdAt(),
   },
   (t) => [index("invoices_deal_idx").on(t.dealId), uniqueIndex("invoices_provider_key").on(t.providerId)],
 );
+
+/** Payment-service events already handled: the same event twice changes nothing. */
+export const paymentEvents = pgTable("payment_events", {
+  id: text("id").primaryKey(),
+  type: text("type").notNull(),
+  receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
+});
 
 /* ───────────── publish package ───────────── */
 
@@ -694,3 +760,6 @@ export type ShootDay = typeof shootDays.$inferSelect;
 export type ShootDayHelper = typeof shootDayHelpers.$inferSelect;
 export type ScheduledStep = typeof scheduledSteps.$inferSelect;
 export type CallSheetSend = typeof callSheetSends.$inferSelect;
+export type Sponsor = typeof sponsors.$inferSelect;
+export type Deal = typeof deals.$inferSelect;
+export type Deliverable = typeof deliverables.$inferSelect;

@@ -8,6 +8,7 @@ import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
 import { channelSchema, channelSettingsSchema, channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, invitationSchema, mailSchema, memberRolesSchema, memberSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
+import { dealCreateSchema, dealSchema, dealUpdateSchema, deliverableCreateSchema, deliverableSchema, sponsorChecksSchema, sponsorCreateSchema, sponsorSchema, sponsorUpdateSchema } from "./schemas/sponsors";
 import { callSheetSchema, callSheetSendSchema, daysAwayListSchema, daysAwaySchema, scheduleSchema, shootDayCreateSchema, shootDayListQuerySchema, shootDaySchema, shootDayUpdateSchema } from "./schemas/shoot";
 import { cutListSchema, materialCreateSchema, materialSchema, materialUpdateSchema, photoUploadSchema, planSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolSchema, toolUpdateSchema } from "./schemas/build";
 import { chaptersSchema, exportQuerySchema, rateSchema, readingRateSchema, scriptSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSchema, segmentSplitSchema, segmentTimingSchema, timingQuerySchema, totalsSchema } from "./schemas/script";
@@ -119,6 +120,19 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/episodes/{episodeId}/schedule", summary: "Plan again and save (producer, owner); answers what moved", response: scheduleSchema, errors: [401, 403, 404] },
   { method: "post", path: "/api/channels/{channelId}/calendar-feed", summary: "Make a new secret calendar feed URL (owner); the old one stops working", response: z.object({ url: z.string() }), status: 201, errors: [401, 403, 404] },
   { method: "get", path: "/api/calendar/{token}", summary: "The channel's shoot days as an iCalendar subscription feed (text/calendar); the token is the key", auth: false, response: z.string(), errors: [404] },
+  { method: "get", path: "/api/channels/{channelId}/sponsors", summary: "The channel's sponsors", response: z.object({ sponsors: z.array(sponsorSchema) }), errors: [401, 404] },
+  { method: "post", path: "/api/channels/{channelId}/sponsors", summary: "Add a sponsor (owner, sponsor liaison)", body: sponsorCreateSchema, response: z.object({ sponsor: sponsorSchema }), status: 201, errors: [400, 401, 403, 404] },
+  { method: "get", path: "/api/sponsors/{sponsorId}", summary: "One sponsor", response: z.object({ sponsor: sponsorSchema }), errors: [401, 404] },
+  { method: "patch", path: "/api/sponsors/{sponsorId}", summary: "Edit a sponsor and its contacts", body: sponsorUpdateSchema, response: z.object({ sponsor: sponsorSchema }), errors: [400, 401, 403, 404] },
+  { method: "delete", path: "/api/sponsors/{sponsorId}", summary: "Archive a sponsor", response: okSchema, errors: [401, 403, 404] },
+  { method: "get", path: "/api/channels/{channelId}/deals", summary: "Deals (fees only for owner and sponsor liaison)", response: z.object({ deals: z.array(dealSchema) }), errors: [401, 404] },
+  { method: "post", path: "/api/channels/{channelId}/deals", summary: "Add a deal with its episodes and tools", body: dealCreateSchema, response: z.object({ deal: dealSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
+  { method: "get", path: "/api/deals/{dealId}", summary: "One deal with its deliverables", response: z.object({ deal: dealSchema }), errors: [401, 404] },
+  { method: "patch", path: "/api/deals/{dealId}", summary: "Edit a deal", body: dealUpdateSchema, response: z.object({ deal: dealSchema }), errors: [400, 401, 403, 404, 422] },
+  { method: "delete", path: "/api/deals/{dealId}", summary: "Archive a deal", response: okSchema, errors: [401, 403, 404] },
+  { method: "post", path: "/api/deals/{dealId}/deliverables", summary: "Add a checkable deliverable", body: deliverableCreateSchema, response: z.object({ deliverable: deliverableSchema }), status: 201, errors: [400, 401, 403, 404] },
+  { method: "delete", path: "/api/deliverables/{deliverableId}", summary: "Remove a deliverable", response: okSchema, errors: [401, 403, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/sponsor-checks", summary: "Every deliverable and material connection checked against the script, plan and B-roll, with timecodes; tool credits", response: sponsorChecksSchema, errors: [401, 404] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];

@@ -31,6 +31,8 @@ export const ACTIONS = {
   "availability.own": ["owner", "presenter", "editor", "producer", "sponsor_liaison"],
   "calendar.rotate": ["owner"],
   "sponsors.manage": ["owner", "sponsor_liaison"],
+  // Everyone reads deals; only these see what a sponsor pays.
+  "deals.fees": ["owner", "sponsor_liaison"],
   "invoices.manage": ["owner", "sponsor_liaison"],
   "publish.edit": ["owner", "presenter", "editor"],
 } as const satisfies Record<string, readonly Role[]>;

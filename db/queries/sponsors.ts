@@ -1,12 +1,123 @@
 import "server-only";
-import { and, asc, eq, isNull } from "drizzle-orm";
-import { db } from "../client";
-import { sponsors } from "../schema";
+import { and, asc, eq, inArray, isNull } from "drizzle-orm";
+import { db, type Q, type Tx } from "../client";
+import { dealEpisodes, dealTools, deals, deliverables, episodes, sponsorContacts, sponsors, tools, type Deal } from "../schema";
 
-export async function listSponsorsByChannel({ channelId }: { channelId: string }) {
-  return db()
+/** Rows of sponsors, deals and deliverables. Rules live in lib/server/services/sponsors.ts. */
+
+export async function listSponsorsByChannel({ channelId, archived = false }: { channelId: string; archived?: boolean }) {
+  const rows = await db()
     .select()
     .from(sponsors)
-    .where(and(eq(sponsors.channelId, channelId), isNull(sponsors.archivedAt)))
+    .where(and(eq(sponsors.channelId, channelId), archived ? undefined : isNull(sponsors.archivedAt)))
     .orderBy(asc(sponsors.name));
+  return rows;
 }
+
+export async function getSponsorById({ id }: { id: string }) {
+  const [row] = await db().select().from(sponsors).where(eq(sponsors.id, id)).limit(1);
+  return row ?? null;
+}
+
+export async function listContactsBySponsors(q: Q, sponsorIds: string[]) {
+  if (!sponsorIds.length) return [];
+  return q.select().from(sponsorContacts).where(inArray(sponsorContacts.sponsorId, sponsorIds)).orderBy(asc(sponsorContacts.name));
+}
+
+export async function insertSponsor(tx: Tx, v: typeof sponsors.$inferInsert) {
+  const [row] = await tx.insert(sponsors).values(v).returning();
+  return row!;
+}
+
+export async function updateSponsorRow(tx: Tx, id: string, set: Partial<typeof sponsors.$inferInsert>) {
+  const [row] = await tx.update(sponsors).set(set).where(eq(sponsors.id, id)).returning();
+  return row ?? null;
+}
+
+export async function replaceContacts(tx: Tx, sponsorId: string, contacts: { name: string; email: string }[]) {
+  await tx.delete(sponsorContacts).where(eq(sponsorContacts.sponsorId, sponsorId));
+  if (contacts.length) await tx.insert(sponsorContacts).values(contacts.map((c) => ({ sponsorId, ...c })));
+}
+
+export async function getDealById({ id }: { id: string }) {
+  const [row] = await db().select().from(deals).where(eq(deals.id, id)).limit(1);
+  return row ?? null;
+}
+
+export async function listDealsByChannel({ channelId }: { channelId: string }) {
+  return db()
+    .select()
+    .from(deals)
+    .where(and(eq(deals.channelId, channelId), isNull(deals.archivedAt)))
+    .orderBy(asc(deals.createdAt));
+}
+
+export async function listDealsByEpisode({ episodeId }: { episodeId: string }) {
+  return db()
+    .select({ deal: deals })
+    .from(dealEpisodes)
+    .innerJoin(deals, eq(deals.id, dealEpisodes.dealId))
+    .where(and(eq(dealEpisodes.episodeId, episodeId), isNull(deals.archivedAt)))
+    .then((r) => r.map((x) => x.deal));
+}
+
+export async function dealLinks(q: Q, dealIds: string[]) {
+  if (!dealIds.length) return { episodes: [], tools: [], deliverables: [] };
+  const [e, t, d] = await Promise.all([
+    q.select().from(dealEpisodes).where(inArray(dealEpisodes.dealId, dealIds)),
+    q.select().from(dealTools).where(inArray(dealTools.dealId, dealIds)),
+    q.select().from(deliverables).where(inArray(deliverables.dealId, dealIds)).orderBy(asc(deliverables.position), asc(deliverables.createdAt)),
+  ]);
+  return { episodes: e, tools: t, deliverables: d };
+}
+
+export async function insertDeal(tx: Tx, v: typeof deals.$inferInsert) {
+  const [row] = await tx.insert(deals).values(v).returning();
+  return row!;
+}
+
+export async function updateDealRow(tx: Tx, id: string, set: Partial<typeof deals.$inferInsert>) {
+  const [row] = await tx
+    .update(deals)
+    .set({ ...set, updatedAt: new Date() })
+    .where(eq(deals.id, id))
+    .returning();
+  return row ?? null;
+}
+
+export async function replaceDealEpisodes(tx: Tx, dealId: string, episodeIds: string[]) {
+  await tx.delete(dealEpisodes).where(eq(dealEpisodes.dealId, dealId));
+  if (episodeIds.length) await tx.insert(dealEpisodes).values(episodeIds.map((episodeId) => ({ dealId, episodeId })));
+}
+
+export async function replaceDealTools(tx: Tx, dealId: string, toolIds: string[]) {
+  await tx.delete(dealTools).where(eq(dealTools.dealId, dealId));
+  if (toolIds.length) await tx.insert(dealTools).values(toolIds.map((toolId) => ({ dealId, toolId })));
+}
+
+/** Which of these ids are the channel's episodes, and which its tools. */
+export async function channelOwns(q: Q, channelId: string, episodeIds: string[], toolIds: string[], sponsorId?: string) {
+  const [e, t, s] = await Promise.all([
+    episodeIds.length ? q.select({ id: episodes.id }).from(episodes).where(and(eq(episodes.channelId, channelId), inArray(episodes.id, episodeIds))) : [],
+    toolIds.length ? q.select({ id: tools.id }).from(tools).where(and(eq(tools.channelId, channelId), inArray(tools.id, toolIds))) : [],
+    sponsorId ? q.select({ id: sponsors.id }).from(sponsors).where(and(eq(sponsors.channelId, channelId), eq(sponsors.id, sponsorId))) : [],
+  ]);
+  return { episodes: new Set(e.map((x) => x.id)), tools: new Set(t.map((x) => x.id)), sponsor: s.length > 0 };
+}
+
+export async function insertDeliverable(tx: Tx, v: typeof deliverables.$inferInsert) {
+  const [row] = await tx.insert(deliverables).values(v).returning();
+  return row!;
+}
+
+export async function getDeliverableById({ id }: { id: string }) {
+  const [row] = await db().select({ deliverable: deliverables, channelId: deals.channelId }).from(deliverables).innerJoin(deals, eq(deals.id, deliverables.dealId)).where(eq(deliverables.id, id)).limit(1);
+  return row ?? null;
+}
+
+export async function deleteDeliverableRow(tx: Tx, id: string) {
+  const [row] = await tx.delete(deliverables).where(eq(deliverables.id, id)).returning();
+  return row ?? null;
+}
+
+export type { Deal };

@@ -7,7 +7,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import fs from "node:fs";
 import path from "node:path";
 import { db } from "@/db/client";
-import { buildSteps, clips, coverageRanges, gaps, invitations, materials, scriptRevisions, scriptSegments, shootDays, shots, tools } from "@/db/schema";
+import { buildSteps, clips, coverageRanges, deals, deliverables, gaps, invitations, materials, scriptRevisions, scriptSegments, shootDays, shots, sponsors, tools } from "@/db/schema";
 import { call, makeEpisode, makeWorld } from "../support/fixtures";
 
 type World = Awaited<ReturnType<typeof makeWorld>>;
@@ -38,7 +38,13 @@ beforeAll(async () => {
   const [range] = await db().insert(coverageRanges).values({ episodeId: ep.id, startFrame: 0, endFrame: 10 }).returning();
   const [inv] = await db().insert(invitations).values({ channelId: w.channel.id, email: "x@test.example", roles: ["editor"], tokenHash: crypto.randomUUID(), expiresAt: new Date(Date.now() + 86400_000) }).returning();
   const [shootDay] = await db().insert(shootDays).values({ channelId: w.channel.id, day: "2027-01-09", callAt: new Date("2027-01-09T09:00:00Z"), wrapAt: new Date("2027-01-09T17:00:00Z") }).returning();
+  const [sponsor] = await db().insert(sponsors).values({ channelId: w.channel.id, name: "Private sponsor" }).returning();
+  const [deal] = await db().insert(deals).values({ channelId: w.channel.id, sponsorId: sponsor!.id, title: "Private deal" }).returning();
+  const [deliverable] = await db().insert(deliverables).values({ dealId: deal!.id, kind: "spoken_disclosure" }).returning();
   Object.assign(ids, {
+    sponsorId: sponsor!.id,
+    dealId: deal!.id,
+    deliverableId: deliverable!.id,
     shootDayId: shootDay!.id,
     channelId: w.channel.id,
     episodeId: ep.id,

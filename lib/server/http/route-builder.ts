@@ -21,6 +21,7 @@ import { loadClip, loadEpisode, loadMaterial, loadSegment, loadShot, loadStep, l
 import { getGapById, getRangeById } from "../../../db/queries/coverage";
 import { getRevisionById } from "../../../db/queries/script";
 import { getShootDayById } from "../../../db/queries/shoot-days";
+import { getDealById, getDeliverableById, getSponsorById } from "../../../db/queries/sponsors";
 
 async function channelOf(userId: string, rawId: string | undefined) {
   const channelId = parseId(rawId, "channel");
@@ -94,6 +95,9 @@ export const LOADERS = {
   range: { param: "rangeId", load: byChannelRow("coverage range", "coverage range", getRangeById, (r) => ({ range: r.range })) },
   revision: { param: "revisionId", load: byChannelRow("revision", "revision", getRevisionById, (r) => ({ revision: r.revision })) },
   shootDay: { param: "shootDayId", load: byChannelRow("shoot-day", "shoot day", getShootDayById, (r) => ({ shootDay: r })) },
+  sponsor: { param: "sponsorId", load: byChannelRow("sponsor", "sponsor", getSponsorById, (r) => ({ sponsor: r })) },
+  deal: { param: "dealId", load: byChannelRow("deal", "deal", getDealById, (r) => ({ deal: r })) },
+  deliverable: { param: "deliverableId", load: byChannelRow("deliverable", "deliverable", getDeliverableById, (r) => ({ deliverable: r.deliverable })) },
 } as const;
 
 export type LoadKind = keyof typeof LOADERS;
