@@ -31,6 +31,9 @@ export function AppHeader({
           <Link className={link} href={`/c/${channelId}/shoot-days`}>
             Shoot days
           </Link>
+          <Link className={link} href={`/c/${channelId}/sponsors`}>
+            Sponsors
+          </Link>
           <Link className={link} href={`/c/${channelId}/tools`}>
             Tool shelf
           </Link>

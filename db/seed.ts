@@ -91,6 +91,7 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>, opts: SeedOpti
     await seedScripts(tx, episodeIds, stepIds, ids["presenter@jigboard.example"]!);
     await seedShotsAndFootage(tx, channel.id, episodeIds, stepIds, ids["editor@jigboard.example"]!, opts);
     await seedShootDays(tx, channel.id, episodeIds, stepIds, ids);
+    await seedDeals(tx, channel.id, episodeIds);
     await tx.insert(schema.episodes).values({
       channelId: outsiderChannel.id,
       title: "Hall bench in steamed beech",
@@ -418,4 +419,37 @@ async function seedShootDays(tx: SeedTx, channelId: string, episodeIds: Record<s
     ["oil", sun, "2026-12-13", "16:25", "17:10"],
   ];
   for (const [key, dayId, date, from, to] of plan) await tx.insert(schema.scheduledSteps).values({ stepId: s[key]!, episodeId: table, shootDayId: dayId, startsAt: utc(date, from), endsAt: utc(date, to) });
+}
+
+/**
+ * Invented sponsors and deals: a paid integration whose read misses a
+ * talking point (a failing check), a gifted sander, and the loaned clamps.
+ */
+async function seedDeals(tx: SeedTx, channelId: string, episodeIds: Record<string, string>) {
+  const [brindle] = await tx.select().from(schema.sponsors).where(sql`${schema.sponsors.channelId} = ${channelId} and ${schema.sponsors.name} = 'Brindle Clamp Company'`);
+  const [clamps] = await tx.select().from(schema.tools).where(sql`${schema.tools.channelId} = ${channelId} and ${schema.tools.name} like 'Parallel clamps%'`);
+  const [kestrel] = await tx.insert(schema.sponsors).values({ channelId, name: "Kestrel Abrasives", website: "https://kestrel-abrasives.example", contactName: "Juno Pell", contactEmail: "juno@kestrel-abrasives.example" }).returning();
+  const [harrow] = await tx.insert(schema.sponsors).values({ channelId, name: "Harrow Power Tools", website: "https://harrow-tools.example", contactName: "Bram Okonkwo", contactEmail: "bram@harrow-tools.example" }).returning();
+  for (const s of [brindle!, kestrel!, harrow!]) await tx.insert(schema.sponsorContacts).values({ sponsorId: s.id, name: s.contactName || "Odile Marchetti", email: s.contactEmail || "odile@brindle-clamps.example" });
+  const [sander] = await tx.insert(schema.tools).values({ channelId, name: "Random orbit sander", kind: "power_tool", acquisition: "gifted", sponsorId: harrow!.id, caution: "Dust extraction on; eye protection." }).returning();
+  const deal = async (v: Omit<typeof schema.deals.$inferInsert, "channelId">, episodes: string[], toolIds: string[], deliverables: Omit<typeof schema.deliverables.$inferInsert, "dealId">[]) => {
+    const [row] = await tx.insert(schema.deals).values({ ...v, channelId, episodeId: episodes[0] ?? null }).returning();
+    for (const e of episodes) await tx.insert(schema.dealEpisodes).values({ dealId: row!.id, episodeId: e });
+    for (const t of toolIds) await tx.insert(schema.dealTools).values({ dealId: row!.id, toolId: t });
+    for (const [i, d] of deliverables.entries()) await tx.insert(schema.deliverables).values({ ...d, dealId: row!.id, position: i });
+  };
+  const fence = episodeIds["Router table fence with dust port"]!;
+  const table = episodeIds["Walnut side table with a floating top"]!;
+  await deal({ sponsorId: brindle!.id, title: "Clamp loan for the router table fence", kind: "loaned_tool", status: "in_review", returnBy: "2027-01-31", publishFrom: "2026-12-15", publishTo: "2026-12-31" }, [fence], [clamps!.id], [
+    { kind: "spoken_disclosure" },
+    { kind: "mention_min_seconds", seconds: 10 },
+    { kind: "talking_points", phrases: ["jaws stay parallel"] },
+  ]);
+  await deal({ sponsorId: kestrel!.id, title: "Sanding read in the walnut table", kind: "paid_integration", feeMinor: 120000, currency: "USD", status: "signed", signedOn: "2026-11-20", scriptDue: "2026-12-08", reviewDue: "2026-12-15", publishFrom: "2027-01-15", publishTo: "2027-02-15" }, [table], [], [
+    { kind: "mention_before", seconds: 180 },
+    { kind: "talking_points", phrases: ["hook-and-loop discs", "no clogging on walnut"] },
+    { kind: "spoken_disclosure" },
+    { kind: "description_link", url: "https://kestrel-abrasives.example/walnut" },
+  ]);
+  await deal({ sponsorId: harrow!.id, title: "Gifted sander", kind: "gifted_tool", status: "signed" }, [table], [sander!.id], [{ kind: "spoken_disclosure" }]);
 }

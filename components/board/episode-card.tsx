@@ -104,7 +104,7 @@ export function EpisodeCard({
               Target <span className="num text-walnut-900">{runtime(episode.targetRuntimeSeconds)}</span>
             </span>
           </p>
-          {/* Progress figures: label above value, so a long figure never runs into its neighbour. The sponsor figure comes with sponsor deals. */}
+          {/* Progress figures: label above value, so a long figure never runs into its neighbour. */}
           <dl className="mt-1.5 grid grid-cols-[1.4fr_1fr_0.8fr] gap-x-1.5 rounded-plank border border-timber-200 px-1.5 py-1 text-xs">
             {[
               ["Script", scriptTitle(episode), scriptFigure(episode)],
@@ -119,6 +119,11 @@ export function EpisodeCard({
               </div>
             ))}
           </dl>
+          {episode.sponsorState ? (
+            <p className={`mt-1.5 text-xs ${episode.sponsorState === "met" ? "text-pass-700" : episode.sponsorState === "blocked" ? "font-bold text-fault-700" : "text-heed-800"}`} data-testid="card-sponsor">
+              Sponsor: {episode.sponsorState === "met" ? "✓ all promises met" : episode.sponsorState === "blocked" ? "✕ a connection is not disclosed" : "● open items"}
+            </p>
+          ) : null}
           <div className="mt-2 flex justify-end">
             {/* An accessible menu primitive: arrow keys, type-ahead, Escape, focus return and the menu roles come from Radix. */}
             <Menu.Root modal={false}>

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Q, type Tx } from "../client";
 import { dealEpisodes, dealTools, deals, deliverables, episodes, sponsorContacts, sponsors, tools, type Deal } from "../schema";
 
@@ -118,6 +118,17 @@ export async function getDeliverableById({ id }: { id: string }) {
 export async function deleteDeliverableRow(tx: Tx, id: string) {
   const [row] = await tx.delete(deliverables).where(eq(deliverables.id, id)).returning();
   return row ?? null;
+}
+
+/** Episodes (of these) that have a deal or use a tool that was not bought. */
+export async function episodesWithSponsorWork({ episodeIds }: { episodeIds: string[] }) {
+  if (!episodeIds.length) return [];
+  const r = await db().execute(sql`
+    select distinct e.id from episodes e
+    where e.id in (${sql.join(episodeIds.map((i) => sql`${i}::uuid`), sql`, `)})
+      and (exists (select 1 from deal_episodes de join deals d on d.id = de.deal_id where de.episode_id = e.id and d.archived_at is null)
+        or exists (select 1 from build_steps s join step_tools st on st.step_id = s.id join tools t on t.id = st.tool_id where s.episode_id = e.id and t.acquisition <> 'bought'))`);
+  return (r.rows as { id: string }[]).map((x) => x.id);
 }
 
 export type { Deal };

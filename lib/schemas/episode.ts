@@ -100,6 +100,8 @@ export const episodeSchema = z
     openGaps: z.number().nullable().optional(),
     shotsDone: z.number().optional(),
     shotsTotal: z.number().optional(),
+    /** Sponsor checks (board list only; absent with nothing to check). */
+    sponsorState: z.enum(["met", "open", "blocked"]).optional(),
   })
   .meta({ id: "Episode" });
 export type EpisodeDto = z.infer<typeof episodeSchema>;

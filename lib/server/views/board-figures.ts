@@ -8,12 +8,16 @@ import { listGapsByEpisodes, listRangesByEpisodes } from "../../../db/queries/co
 import { getChannelById } from "../../../db/queries/channels";
 import { countShotsByEpisodes } from "../../../db/queries/shots";
 import { listReadingRatesByUserIds } from "../../../db/queries/users";
+import { episodesWithSponsorWork } from "../../../db/queries/sponsors";
+import { sponsorChecksFor } from "./sponsors";
 
 export interface BoardFigures {
   scriptSeconds: number | null;
   openGaps: number | null;
   shotsDone: number;
   shotsTotal: number;
+  /** The sponsor checks' state; absent when the episode has no deal and no sponsored tool. */
+  sponsorState?: "met" | "open" | "blocked";
 }
 
 /** The progress figures each board card shows, for all episodes of one channel at once. */
@@ -39,6 +43,12 @@ export async function boardFigures(episodes: Episode[]): Promise<Map<string, Boa
     const view = scriptView(e, mine, e.presenterId ? (wpm.get(e.presenterId) ?? DEFAULT_WPM) : DEFAULT_WPM);
     const cov = coverageOf(e, channel!, view, ranges.filter((r) => r.episodeId === e.id), gaps.filter((g) => g.episodeId === e.id));
     out.set(e.id, { scriptSeconds: Math.round(view.totals.seconds), openGaps: cov.openGaps, shotsDone: s.done, shotsTotal: s.total });
+  }
+  // Sponsor checks only where there is something to check: a deal, or a gifted, loaned or paid tool in the plan.
+  for (const id of await episodesWithSponsorWork({ episodeIds: ids })) {
+    const e = episodes.find((x) => x.id === id)!;
+    const { state } = await sponsorChecksFor(e);
+    if (state !== "none") out.set(id, { ...(out.get(id) ?? { scriptSeconds: null, openGaps: null, shotsDone: 0, shotsTotal: 0 }), sponsorState: state });
   }
   return out;
 }

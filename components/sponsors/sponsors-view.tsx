@@ -1,0 +1,254 @@
+"use client";
+/** Sponsors and their deals: who, what was promised, when, and (for the liaison and owner) for how much. */
+import { useState } from "react";
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { ApiError, fetchJson } from "@/components/fetch-json";
+import { useWrite } from "@/components/use-write";
+import { Button } from "@/components/ui/button";
+import { CheckboxLabel } from "@/components/ui/checkbox";
+import { Notice, SelectField, TextField } from "@/components/ui/field";
+import { DEAL_KINDS, DEAL_KIND_LABELS, DELIVERABLE_KINDS, DELIVERABLE_LABELS, type DeliverableKind } from "@/lib/sponsor-checks";
+import { DEAL_STATUSES, DEAL_STATUS_LABELS, type DealDto, type DealStatus, type SponsorDto } from "@/lib/schemas/sponsors";
+import { formatMoney } from "@/lib/materials";
+
+interface Props {
+  channelId: string;
+  canManage: boolean;
+  currency: string;
+  episodes: { id: string; title: string }[];
+  tools: { id: string; name: string; acquisition: string }[];
+}
+
+const named = (e: unknown) => {
+  const fields = e instanceof ApiError ? (e.fields ?? {}) : {};
+  const list = Object.entries(fields).map(([k, v]) => `${k}: ${v.join("; ")}`);
+  return list.length ? `Not saved. ${list.join(". ")}.` : (e as Error).message;
+};
+
+export function SponsorsView(p: Props) {
+  const qc = useQueryClient();
+  const write = useWrite({ scope: `sponsors:${p.channelId}` });
+  const sponsors = useQuery({ queryKey: ["sponsors", p.channelId], queryFn: () => fetchJson<{ sponsors: SponsorDto[] }>(`/api/channels/${p.channelId}/sponsors`) });
+  const deals = useQuery({ queryKey: ["deals", p.channelId], queryFn: () => fetchJson<{ deals: DealDto[] }>(`/api/channels/${p.channelId}/deals`) });
+  const refresh = () => Promise.all([qc.invalidateQueries({ queryKey: ["sponsors", p.channelId] }), qc.invalidateQueries({ queryKey: ["deals", p.channelId] })]);
+  const [msg, setMsg] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
+  const [sp, setSp] = useState({ name: "", website: "", contactName: "", contactEmail: "" });
+  const [deal, setDeal] = useState({ sponsorId: "", title: "", kind: "paid_integration", fee: "", status: "proposed" as DealStatus, publishFrom: "", publishTo: "", returnBy: "", episodeIds: [] as string[], toolIds: [] as string[] });
+  const list = sponsors.data?.sponsors ?? [];
+  const dealList = deals.data?.deals ?? [];
+
+  return (
+    <div className="space-y-6">
+      {msg ? <Notice tone={msg.tone}>{msg.text}</Notice> : null}
+      <section aria-labelledby="sp-h" className="space-y-2">
+        <h2 id="sp-h" className="text-lg font-bold">
+          Sponsors
+        </h2>
+        <ul className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
+          {list.map((s) => (
+            <li key={s.id} className="rounded-plank border border-timber-300 bg-white p-3 text-sm">
+              <p className="font-bold">{s.name}</p>
+              {s.website ? <p className="text-walnut-700">{s.website}</p> : null}
+              {s.contacts.map((c) => (
+                <p key={c.id}>
+                  {c.name} · {c.email}
+                </p>
+              ))}
+            </li>
+          ))}
+          {list.length ? null : <li className="text-sm text-walnut-700">No sponsors yet.</li>}
+        </ul>
+        {p.canManage ? (
+          <form
+            aria-label="New sponsor"
+            className="grid gap-2 rounded-plank border border-timber-300 bg-white p-3 sm:grid-cols-5"
+            onSubmit={async (e) => {
+              e.preventDefault();
+              try {
+                await write(`/api/channels/${p.channelId}/sponsors`, "POST", { name: sp.name, website: sp.website, contacts: sp.contactName ? [{ name: sp.contactName, email: sp.contactEmail }] : [] });
+                setSp({ name: "", website: "", contactName: "", contactEmail: "" });
+                setMsg({ tone: "ok", text: "Sponsor added." });
+                await refresh();
+              } catch (err) {
+                setMsg({ tone: "error", text: named(err) });
+              }
+            }}
+          >
+            <TextField label="Sponsor name" value={sp.name} onChange={(e) => setSp({ ...sp, name: e.target.value })} required />
+            <TextField label="Website" value={sp.website} onChange={(e) => setSp({ ...sp, website: e.target.value })} />
+            <TextField label="Contact name" value={sp.contactName} onChange={(e) => setSp({ ...sp, contactName: e.target.value })} />
+            <TextField label="Contact e-mail" type="email" value={sp.contactEmail} onChange={(e) => setSp({ ...sp, contactEmail: e.target.value })} />
+            <div className="flex items-end">
+              <Button type="submit">Add sponsor</Button>
+            </div>
+          </form>
+        ) : null}
+      </section>
+
+      <section aria-labelledby="deals-h" className="space-y-2">
+        <h2 id="deals-h" className="text-lg font-bold">
+          Deals
+        </h2>
+        <ul className="space-y-3">
+          {dealList.map((d) => (
+            <DealItem key={d.id} deal={d} {...p} onChanged={refresh} />
+          ))}
+          {dealList.length ? null : <li className="text-sm text-walnut-700">No deals yet.</li>}
+        </ul>
+        {p.canManage ? (
+          <form
+            aria-label="New deal"
+            className="grid gap-2 rounded-plank border border-timber-300 bg-white p-3 sm:grid-cols-4"
+            onSubmit={async (e) => {
+              e.preventDefault();
+              try {
+                await write(`/api/channels/${p.channelId}/deals`, "POST", {
+                  sponsorId: deal.sponsorId,
+                  title: deal.title,
+                  kind: deal.kind,
+                  feeMinor: deal.fee ? Math.round(Number(deal.fee) * 100) : 0,
+                  currency: p.currency,
+                  status: deal.status,
+                  publishFrom: deal.publishFrom || null,
+                  publishTo: deal.publishTo || null,
+                  returnBy: deal.returnBy || null,
+                  episodeIds: deal.episodeIds,
+                  toolIds: deal.toolIds,
+                });
+                setMsg({ tone: "ok", text: "Deal added. Add its deliverables to have them checked." });
+                await refresh();
+              } catch (err) {
+                setMsg({ tone: "error", text: named(err) });
+              }
+            }}
+          >
+            <SelectField label="Sponsor" value={deal.sponsorId} onChange={(e) => setDeal({ ...deal, sponsorId: e.target.value })} required>
+              <option value="">Choose…</option>
+              {list.map((s) => (
+                <option key={s.id} value={s.id}>
+                  {s.name}
+                </option>
+              ))}
+            </SelectField>
+            <TextField label="Deal title" value={deal.title} onChange={(e) => setDeal({ ...deal, title: e.target.value })} required />
+            <SelectField label="Kind" value={deal.kind} onChange={(e) => setDeal({ ...deal, kind: e.target.value })}>
+              {DEAL_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {DEAL_KIND_LABELS[k]}
+                </option>
+              ))}
+            </SelectField>
+            <TextField label={`Fee (${p.currency})`} inputMode="decimal" value={deal.fee} onChange={(e) => setDeal({ ...deal, fee: e.target.value })} />
+            <TextField label="Publish from" type="date" value={deal.publishFrom} onChange={(e) => setDeal({ ...deal, publishFrom: e.target.value })} />
+            <TextField label="Publish by" type="date" value={deal.publishTo} onChange={(e) => setDeal({ ...deal, publishTo: e.target.value })} />
+            <TextField label="Return the tool by" type="date" value={deal.returnBy} onChange={(e) => setDeal({ ...deal, returnBy: e.target.value })} />
+            <SelectField label="Status" value={deal.status} onChange={(e) => setDeal({ ...deal, status: e.target.value as DealStatus })}>
+              {DEAL_STATUSES.map((s) => (
+                <option key={s} value={s}>
+                  {DEAL_STATUS_LABELS[s]}
+                </option>
+              ))}
+            </SelectField>
+            <fieldset className="sm:col-span-2">
+              <legend className="text-sm font-medium">Episodes</legend>
+              {p.episodes.map((e) => (
+                <CheckboxLabel key={e.id} label={e.title} checked={deal.episodeIds.includes(e.id)} onChange={(ev) => setDeal({ ...deal, episodeIds: ev.target.checked ? [...deal.episodeIds, e.id] : deal.episodeIds.filter((x) => x !== e.id) })} />
+              ))}
+            </fieldset>
+            <fieldset className="sm:col-span-2">
+              <legend className="text-sm font-medium">Tools from the shelf</legend>
+              {p.tools.map((t) => (
+                <CheckboxLabel key={t.id} label={`${t.name}${t.acquisition !== "bought" ? ` (${t.acquisition})` : ""}`} checked={deal.toolIds.includes(t.id)} onChange={(ev) => setDeal({ ...deal, toolIds: ev.target.checked ? [...deal.toolIds, t.id] : deal.toolIds.filter((x) => x !== t.id) })} />
+              ))}
+            </fieldset>
+            <div className="sm:col-span-4">
+              <Button type="submit" variant="primary">
+                Add deal
+              </Button>
+            </div>
+          </form>
+        ) : null}
+      </section>
+    </div>
+  );
+}
+
+function DealItem({ deal, canManage, episodes, tools, channelId, onChanged }: Props & { deal: DealDto; onChanged: () => Promise<unknown> }) {
+  const write = useWrite({ scope: `sponsors:${channelId}` });
+  const [kind, setKind] = useState<DeliverableKind>("spoken_disclosure");
+  const [value, setValue] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <li className="rounded-plank border border-timber-300 bg-white p-3 text-sm" data-testid="deal">
+      <p className="font-bold">
+        {deal.title} · {deal.sponsorName}
+      </p>
+      <p className="text-walnut-700">
+        {DEAL_KIND_LABELS[deal.kind]} · {DEAL_STATUS_LABELS[deal.status]}
+        {deal.feeMinor !== null ? ` · ${formatMoney(deal.feeMinor, deal.currency)}` : ""}
+        {deal.publishFrom || deal.publishTo ? ` · publish ${deal.publishFrom ?? "…"} to ${deal.publishTo ?? "…"}` : ""}
+        {deal.returnBy ? ` · return by ${deal.returnBy}` : ""}
+      </p>
+      <p className="text-walnut-700">
+        Episodes: {deal.episodeIds.map((id) => episodes.find((e) => e.id === id)?.title ?? "?").join(", ") || "none"} · Tools: {deal.toolIds.map((id) => tools.find((t) => t.id === id)?.name ?? "?").join(", ") || "none"}
+      </p>
+      <ul className="ml-4 mt-1 list-disc" aria-label="Deliverables">
+        {deal.deliverables.map((x) => (
+          <li key={x.id}>
+            {DELIVERABLE_LABELS[x.kind]}
+            {x.seconds != null ? ` ${x.seconds} s` : ""}
+            {x.phrases.length ? `: ${x.phrases.map((ph) => `“${ph}”`).join(", ")}` : ""}
+            {x.url ? `: ${x.url}` : ""}
+            {canManage ? (
+              <Button
+                variant="quiet"
+                className="ml-2"
+                onClick={async () => {
+                  await write(`/api/deliverables/${x.id}`, "DELETE");
+                  await onChanged();
+                }}
+              >
+                Remove
+              </Button>
+            ) : null}
+          </li>
+        ))}
+      </ul>
+      {canManage ? (
+        <form
+          aria-label={`New deliverable for ${deal.title}`}
+          className="mt-2 flex flex-wrap items-end gap-2"
+          onSubmit={async (e) => {
+            e.preventDefault();
+            const body = kind === "talking_points" ? { kind, phrases: value.split(";").map((v) => v.trim()).filter(Boolean) } : kind === "description_link" ? { kind, url: value } : kind.startsWith("mention") ? { kind, seconds: Number(value) } : { kind };
+            try {
+              await write(`/api/deals/${deal.id}/deliverables`, "POST", body);
+              setValue("");
+              setError(null);
+              await onChanged();
+            } catch (err) {
+              setError(named(err));
+            }
+          }}
+        >
+          <SelectField label="Deliverable" value={kind} onChange={(e) => setKind(e.target.value as DeliverableKind)}>
+            {DELIVERABLE_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {DELIVERABLE_LABELS[k]}
+              </option>
+            ))}
+          </SelectField>
+          {kind.startsWith("mention") || kind === "talking_points" || kind === "description_link" ? (
+            <TextField
+              label={kind === "talking_points" ? "Talking points (separate with ;)" : kind === "description_link" ? "Link" : "Seconds"}
+              value={value}
+              onChange={(e) => setValue(e.target.value)}
+            />
+          ) : null}
+          <Button type="submit">Add</Button>
+          {error ? <p className="w-full text-fault-700">{error}</p> : null}
+        </form>
+      ) : null}
+    </li>
+  );
+}

@@ -1,0 +1,68 @@
+import { test } from "@playwright/test";
+import { SignInPage, expect, shot } from "./pages";
+
+test("liaison sets up a deal, sees a failing check against the script, and sees it pass once the read is fixed", async ({ page, browser }) => {
+  await new SignInPage(page).signIn("sponsors@jigboard.example");
+  const channelId = page.url().split("/c/")[1]!;
+  const presenter = await browser.newContext();
+  const pp = await presenter.newPage();
+  await new SignInPage(pp).signIn("presenter@jigboard.example");
+  const title = `Spice rack ${Date.now().toString(36)}`;
+  const { episode } = (await (await pp.request.post(`/api/channels/${channelId}/episodes`, { data: { title, stage: "planning", frameRate: "25" } })).json()) as { episode: { id: string } };
+  await pp.request.post(`/api/episodes/${episode.id}/script`, { data: { kind: "to_camera", text: "A spice rack from one board of cherry." } });
+  const read = ((await (await pp.request.post(`/api/episodes/${episode.id}/script`, { data: { kind: "sponsor_read", text: "This video is sponsored by Marlowe Finishes, whose oil I use on everything." } })).json()) as { segment: { id: string; version: number } }).segment;
+
+  await page.goto(`/c/${channelId}/sponsors`);
+  const sp = page.getByRole("form", { name: "New sponsor" });
+  await sp.getByLabel("Sponsor name").fill("Marlowe Finishes");
+  await sp.getByLabel("Contact name").fill("Tess Arden");
+  await sp.getByLabel("Contact e-mail").fill("tess@marlowe-finishes.example");
+  await sp.getByRole("button", { name: "Add sponsor" }).click();
+  await expect(page.getByRole("status").filter({ hasText: "Sponsor added." })).toBeVisible();
+
+  const form = page.getByRole("form", { name: "New deal" });
+  await form.getByLabel("Sponsor").selectOption({ label: "Marlowe Finishes" });
+  await form.getByLabel("Deal title").fill("Oil read in the spice rack");
+  await form.getByLabel("Fee (USD)").fill("800");
+  await form.getByLabel("Publish from").fill("2027-03-01");
+  await form.getByLabel("Publish by").fill("2027-03-31");
+  await form.getByText(title).click();
+  await form.getByRole("button", { name: "Add deal" }).click();
+  const deal = page.getByTestId("deal").filter({ hasText: "Oil read in the spice rack" });
+  await expect(deal).toContainText("$800.00");
+  const add = deal.getByRole("form", { name: "New deliverable for Oil read in the spice rack" });
+  await add.getByLabel("Deliverable").selectOption({ label: "Talking points in the read" });
+  await add.getByLabel("Talking points (separate with ;)").fill("food-safe once cured; wipe on, wipe off");
+  await add.getByRole("button", { name: "Add" }).click();
+  await expect(deal).toContainText("“food-safe once cured”, “wipe on, wipe off”");
+  await add.getByLabel("Deliverable").selectOption({ label: "Mention starts before" });
+  await add.getByLabel("Seconds").fill("60");
+  await add.getByRole("button", { name: "Add" }).click();
+  await add.getByLabel("Deliverable").selectOption({ label: "Disclosure said at or before the first mention" });
+  await add.getByRole("button", { name: "Add" }).click();
+  await expect(deal.getByRole("list", { name: "Deliverables" }).getByRole("listitem")).toHaveCount(3);
+
+  await page.goto(`/c/${channelId}/episodes/${episode.id}/sponsors`);
+  const points = page.getByTestId("check-result").filter({ hasText: "Talking points in the read" });
+  await expect(points).toContainText("✕ Not met");
+  await expect(points).toContainText("Missing from the read: “food-safe once cured”, “wipe on, wipe off”.");
+  await expect(page.getByTestId("check-result").filter({ hasText: "Mention starts before" })).toContainText("✓ Met");
+  await expect(page.getByTestId("checks-state")).toContainText("Some promises are not kept yet.");
+  await shot(page, "sponsor-checks-failing");
+
+  // The presenter fixes the read; the check follows.
+  await pp.request.patch(`/api/segments/${read.id}`, { data: { version: read.version, text: "This video is sponsored by Marlowe Finishes. Their oil is food-safe once cured: wipe on, wipe off, and that's it." } });
+  await presenter.close();
+  await page.reload();
+  await expect(points).toContainText("✓ Met");
+  await expect(page.getByTestId("checks-state")).toContainText("Every promise is kept");
+  await shot(page, "sponsor-checks");
+
+  // The editor reads the deal but not its fee.
+  const editor = await browser.newContext();
+  const ep = await editor.newPage();
+  await new SignInPage(ep).signIn("editor@jigboard.example");
+  await ep.goto(`/c/${channelId}/sponsors`);
+  await expect(ep.getByTestId("deal").filter({ hasText: "Oil read in the spice rack" })).not.toContainText("$800");
+  await editor.close();
+});
