@@ -24,7 +24,7 @@ export function AppHeader({
           Jigboard
         </Link>
         <ChannelSwitcher channels={channels} current={channelId} />
-        <nav aria-label="Channel" className="flex gap-1 text-sm">
+        <nav aria-label="Channel" className="flex flex-wrap gap-1 text-sm">
           <Link className={link} href={`/c/${channelId}`}>
             Episodes
           </Link>
