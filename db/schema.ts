@@ -763,3 +763,4 @@ export type CallSheetSend = typeof callSheetSends.$inferSelect;
 export type Sponsor = typeof sponsors.$inferSelect;
 export type Deal = typeof deals.$inferSelect;
 export type Deliverable = typeof deliverables.$inferSelect;
+export type GuestLink = typeof guestLinks.$inferSelect;

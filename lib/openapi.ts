@@ -8,7 +8,7 @@ import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
 import { channelSchema, channelSettingsSchema, channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, invitationSchema, mailSchema, memberRolesSchema, memberSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
-import { dealCreateSchema, dealSchema, dealUpdateSchema, deliverableCreateSchema, deliverableSchema, sponsorChecksSchema, sponsorCreateSchema, sponsorSchema, sponsorUpdateSchema } from "./schemas/sponsors";
+import { dealReviewSchema, guestReviewSchema, reviewDecisionSchema, reviewLinkCreateSchema, reviewReplySchema, dealCreateSchema, dealSchema, dealUpdateSchema, deliverableCreateSchema, deliverableSchema, sponsorChecksSchema, sponsorCreateSchema, sponsorSchema, sponsorUpdateSchema } from "./schemas/sponsors";
 import { callSheetSchema, callSheetSendSchema, daysAwayListSchema, daysAwaySchema, scheduleSchema, shootDayCreateSchema, shootDayListQuerySchema, shootDaySchema, shootDayUpdateSchema } from "./schemas/shoot";
 import { cutListSchema, materialCreateSchema, materialSchema, materialUpdateSchema, photoUploadSchema, planSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolSchema, toolUpdateSchema } from "./schemas/build";
 import { chaptersSchema, exportQuerySchema, rateSchema, readingRateSchema, scriptSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSchema, segmentSplitSchema, segmentTimingSchema, timingQuerySchema, totalsSchema } from "./schemas/script";
@@ -133,6 +133,12 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/deals/{dealId}/deliverables", summary: "Add a checkable deliverable", body: deliverableCreateSchema, response: z.object({ deliverable: deliverableSchema }), status: 201, errors: [400, 401, 403, 404] },
   { method: "delete", path: "/api/deliverables/{deliverableId}", summary: "Remove a deliverable", response: okSchema, errors: [401, 403, 404] },
   { method: "get", path: "/api/episodes/{episodeId}/sponsor-checks", summary: "Every deliverable and material connection checked against the script, plan and B-roll, with timecodes; tool credits", response: sponsorChecksSchema, errors: [401, 404] },
+  { method: "post", path: "/api/deals/{dealId}/review-links", summary: "Mail a sponsor's contact an expiring review link for this deal only", body: reviewLinkCreateSchema, response: z.object({ link: z.object({ id: z.string(), contactEmail: z.string(), expiresAt: z.string() }) }), status: 201, errors: [400, 401, 403, 404] },
+  { method: "delete", path: "/api/review-links/{reviewLinkId}", summary: "Withdraw a review link", response: okSchema, errors: [401, 403, 404, 409] },
+  { method: "get", path: "/api/deals/{dealId}/review", summary: "The review thread, its state and the links sent", response: dealReviewSchema, errors: [401, 404] },
+  { method: "post", path: "/api/deals/{dealId}/review", summary: "Reply in the review thread (liaison, presenter, owner)", body: reviewReplySchema, response: dealReviewSchema, status: 201, errors: [400, 401, 403, 404] },
+  { method: "get", path: "/api/review/{token}", summary: "Guest: the deal's segments, checks and clips through a review link (no session; the token is the key)", auth: false, response: guestReviewSchema, errors: [404] },
+  { method: "post", path: "/api/review/{token}/decision", summary: "Guest: approve, or request changes with a comment", auth: false, body: reviewDecisionSchema, response: guestReviewSchema, status: 201, errors: [400, 404] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];

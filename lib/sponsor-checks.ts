@@ -174,10 +174,7 @@ export function runChecks(input: CheckInput): CheckReport {
   const onScreen = input.segments.filter((s) => s.kind === "on_screen_text");
   const results: CheckResult[] = [];
 
-  const mentionsOf = (deal: CheckDeal) => {
-    const names = [deal.sponsorName, ...deal.toolIds.map((t) => toolById.get(t)?.name ?? "")].filter(Boolean);
-    return spoken.filter((s) => contains(s.text, deal.sponsorName) || (s.kind === "sponsor_read" && names.some((n) => contains(s.text, n))));
-  };
+  const mentionsOf = (deal: CheckDeal) => mentionSegments(deal, input.segments, input.tools);
 
   for (const d of input.deliverables) {
     const deal = input.deals.find((x) => x.id === d.dealId);
@@ -330,6 +327,12 @@ export function runChecks(input: CheckInput): CheckReport {
   const undisclosed = results.some((r) => r.kind === "undisclosed_connection" && !r.pass);
   const state: CheckReport["state"] = results.length === 0 ? "none" : undisclosed ? "blocked" : results.every((r) => r.pass) ? "met" : "open";
   return { results, credits, state };
+}
+
+/** A deal's spoken mentions: segments naming the sponsor, and sponsor reads naming one of the deal's tools. */
+export function mentionSegments(deal: CheckDeal, segments: CheckSegment[], tools: CheckInput["tools"]): CheckSegment[] {
+  const names = [deal.sponsorName, ...deal.toolIds.map((t) => tools.find((x) => x.id === t)?.name ?? "")].filter(Boolean);
+  return segments.filter((s) => SPOKEN.includes(s.kind) && (contains(s.text, deal.sponsorName) || (s.kind === "sponsor_read" && names.some((n) => contains(s.text, n)))));
 }
 
 /** Where a tool is on the timeline: segments of steps that use it, and B-roll of those steps' shots, merged. */

@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { CheckboxLabel } from "@/components/ui/checkbox";
 import { Notice, SelectField, TextField } from "@/components/ui/field";
 import { DEAL_KINDS, DEAL_KIND_LABELS, DELIVERABLE_KINDS, DELIVERABLE_LABELS, type DeliverableKind } from "@/lib/sponsor-checks";
-import { DEAL_STATUSES, DEAL_STATUS_LABELS, type DealDto, type DealStatus, type SponsorDto } from "@/lib/schemas/sponsors";
+import { DEAL_STATUSES, DEAL_STATUS_LABELS, type DealDto, type DealReviewDto, type DealStatus, type SponsorDto } from "@/lib/schemas/sponsors";
 import { formatMoney } from "@/lib/materials";
 
 interface Props {
@@ -214,6 +214,7 @@ function DealItem({ deal, canManage, episodes, tools, channelId, onChanged }: Pr
           </li>
         ))}
       </ul>
+      <ReviewPanel deal={deal} canManage={canManage} channelId={channelId} />
       {canManage ? (
         <form
           aria-label={`New deliverable for ${deal.title}`}
@@ -250,5 +251,75 @@ function DealItem({ deal, canManage, episodes, tools, channelId, onChanged }: Pr
         </form>
       ) : null}
     </li>
+  );
+}
+
+const REVIEW_STATE: Record<DealReviewDto["state"], string> = {
+  not_sent: "Review: not sent yet",
+  waiting: "Review: waiting for the sponsor",
+  approved: "Review: approved by the sponsor",
+  changes_requested: "Review: the sponsor asked for changes",
+  reopened: "Review: reopened (the script changed after the sponsor's decision)",
+};
+
+function ReviewPanel({ deal, canManage, channelId }: { deal: DealDto; canManage: boolean; channelId: string }) {
+  const qc = useQueryClient();
+  const key = ["deal-review", deal.id];
+  const q = useQuery({ queryKey: key, queryFn: () => fetchJson<DealReviewDto>(`/api/deals/${deal.id}/review`) });
+  const write = useWrite({ scope: `sponsors:${channelId}` });
+  const [email, setEmail] = useState("");
+  const [msg, setMsg] = useState<string | null>(null);
+  const r = q.data;
+  if (!r) return null;
+  return (
+    <div className="mt-2 rounded-plank border border-timber-200 p-2" data-testid="deal-review">
+      <p className="font-medium">{REVIEW_STATE[r.state]}</p>
+      {r.thread.map((c) => (
+        <p key={c.id} className="text-walnut-800">
+          {c.from}
+          {c.decision ? ` · ${c.decision === "approved" ? "approved" : "asked for changes"}` : ""}
+          {c.body ? `: ${c.body}` : ""}
+        </p>
+      ))}
+      {r.links.map((l) => (
+        <p key={l.id} className="text-xs text-walnut-700">
+          Link to {l.contactEmail}, until {l.expiresAt.slice(0, 10)}
+          {l.revokedAt ? " · withdrawn" : ""}
+          {canManage && !l.revokedAt ? (
+            <Button
+              variant="quiet"
+              className="ml-1"
+              onClick={async () => {
+                await write(`/api/review-links/${l.id}`, "DELETE");
+                await qc.invalidateQueries({ queryKey: key });
+              }}
+            >
+              Withdraw
+            </Button>
+          ) : null}
+        </p>
+      ))}
+      {canManage ? (
+        <form
+          aria-label={`Send a review link for ${deal.title}`}
+          className="mt-1 flex flex-wrap items-end gap-2"
+          onSubmit={async (e) => {
+            e.preventDefault();
+            try {
+              await write(`/api/deals/${deal.id}/review-links`, "POST", { contactEmail: email });
+              setMsg(`Review link sent to ${email}.`);
+              setEmail("");
+              await qc.invalidateQueries({ queryKey: key });
+            } catch (err) {
+              setMsg(named(err));
+            }
+          }}
+        >
+          <TextField label="Sponsor contact's e-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} required />
+          <Button type="submit">Send review link</Button>
+          {msg ? <p className="w-full text-walnut-800">{msg}</p> : null}
+        </form>
+      ) : null}
+    </div>
   );
 }

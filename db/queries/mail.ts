@@ -18,6 +18,9 @@ export async function listMailMessagesForChannel({ channelId, limit = 100 }: { c
         (m.kind = 'invitation' and exists (
           select 1 from invitations i
           where i.id = m.ref_id and i.channel_id = ${channelId} and i.accepted_at is null and i.revoked_at is null and i.expires_at > now()))
+        or (m.kind = 'review_link' and exists (
+          select 1 from guest_links g join deals d on d.id = g.deal_id
+          where g.id = m.ref_id and d.channel_id = ${channelId}))
         or (m.kind = 'call_sheet' and exists (
           select 1 from call_sheet_sends c join shoot_days d on d.id = c.shoot_day_id
           where c.id = m.ref_id and d.channel_id = ${channelId}))

@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, eq, inArray, isNull, sql } from "drizzle-orm";
+import { and, asc, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Q, type Tx } from "../client";
-import { dealEpisodes, dealTools, deals, deliverables, episodes, sponsorContacts, sponsors, tools, type Deal } from "../schema";
+import { dealEpisodes, dealTools, deals, deliverables, episodes, guestLinks, reviewComments, sponsorContacts, sponsors, tools, users, type Deal } from "../schema";
 
 /** Rows of sponsors, deals and deliverables. Rules live in lib/server/services/sponsors.ts. */
 
@@ -129,6 +129,51 @@ export async function episodesWithSponsorWork({ episodeIds }: { episodeIds: stri
       and (exists (select 1 from deal_episodes de join deals d on d.id = de.deal_id where de.episode_id = e.id and d.archived_at is null)
         or exists (select 1 from build_steps s join step_tools st on st.step_id = s.id join tools t on t.id = st.tool_id where s.episode_id = e.id and t.acquisition <> 'bought'))`);
   return (r.rows as { id: string }[]).map((x) => x.id);
+}
+
+
+export async function insertGuestLink(tx: Tx, v: typeof guestLinks.$inferInsert) {
+  const [row] = await tx.insert(guestLinks).values(v).returning();
+  return row!;
+}
+
+/** A review link that still works (not revoked, not expired), with its deal. */
+export async function getLiveGuestLinkByHash({ hash }: { hash: string }) {
+  const [row] = await db()
+    .select({ link: guestLinks, deal: deals })
+    .from(guestLinks)
+    .innerJoin(deals, eq(deals.id, guestLinks.dealId))
+    .where(and(eq(guestLinks.tokenHash, hash), isNull(guestLinks.revokedAt), gt(guestLinks.expiresAt, new Date()), isNull(deals.archivedAt)))
+    .limit(1);
+  return row ?? null;
+}
+
+export async function getGuestLinkById({ id }: { id: string }) {
+  const [row] = await db().select({ link: guestLinks, channelId: deals.channelId }).from(guestLinks).innerJoin(deals, eq(deals.id, guestLinks.dealId)).where(eq(guestLinks.id, id)).limit(1);
+  return row ?? null;
+}
+
+export async function revokeGuestLinkRow(tx: Tx, id: string) {
+  const [row] = await tx.update(guestLinks).set({ revokedAt: new Date() }).where(and(eq(guestLinks.id, id), isNull(guestLinks.revokedAt))).returning();
+  return row ?? null;
+}
+
+export async function listGuestLinks({ dealId }: { dealId: string }) {
+  return db().select().from(guestLinks).where(eq(guestLinks.dealId, dealId)).orderBy(asc(guestLinks.createdAt));
+}
+
+export async function insertReviewComment(tx: Tx, v: typeof reviewComments.$inferInsert) {
+  const [row] = await tx.insert(reviewComments).values(v).returning();
+  return row!;
+}
+
+export async function listReviewComments({ dealId }: { dealId: string }) {
+  return db()
+    .select({ comment: reviewComments, userName: users.name })
+    .from(reviewComments)
+    .leftJoin(users, eq(users.id, reviewComments.userId))
+    .where(eq(reviewComments.dealId, dealId))
+    .orderBy(asc(reviewComments.createdAt));
 }
 
 export type { Deal };

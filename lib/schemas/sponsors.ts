@@ -151,3 +151,58 @@ export const sponsorChecksSchema = z
   })
   .meta({ id: "SponsorChecks" });
 export type SponsorChecksDto = z.infer<typeof sponsorChecksSchema>;
+
+// ---- Sponsor review
+
+export const reviewLinkCreateSchema = z
+  .object({
+    contactEmail: z.email({ message: "must be an e-mail address" }),
+    days: z.number().int("whole days").min(1, "at least 1 day").max(30, "at most 30 days").default(14),
+  })
+  .strict()
+  .meta({ id: "ReviewLinkCreate" });
+
+export const reviewDecisionSchema = z
+  .object({
+    decision: z.enum(["approved", "changes_requested"]),
+    comment: z.string().trim().max(4000).default(""),
+  })
+  .strict()
+  .refine((v) => v.decision === "approved" || v.comment.length > 0, { message: "say what should change", path: ["comment"] })
+  .meta({ id: "ReviewDecision" });
+
+export const reviewReplySchema = z.object({ body: z.string().trim().min(1, "write a reply").max(4000) }).strict().meta({ id: "ReviewReply" });
+
+export const REVIEW_STATES = ["not_sent", "waiting", "approved", "changes_requested", "reopened"] as const;
+
+const commentSchema = z.object({ id: z.string(), from: z.string(), decision: z.enum(["approved", "changes_requested"]).nullable(), body: z.string(), createdAt: z.string(), current: z.boolean() });
+
+/** What a sponsor's contact sees: this deal only. */
+export const guestReviewSchema = z
+  .object({
+    sponsorName: z.string(),
+    dealTitle: z.string(),
+    episodes: z.array(
+      z.object({
+        title: z.string(),
+        segments: z.array(z.object({ id: z.string(), kind: z.string(), text: z.string(), start: z.string(), end: z.string(), seconds: z.number() })),
+        checks: z.array(z.object({ label: z.string(), pass: z.boolean(), message: z.string() })),
+        clips: z.array(z.object({ id: z.string(), name: z.string(), url: z.string() })),
+      }),
+    ),
+    state: z.enum(REVIEW_STATES),
+    thread: z.array(commentSchema),
+    expiresAt: z.string(),
+  })
+  .meta({ id: "GuestReview" });
+export type GuestReviewDto = z.infer<typeof guestReviewSchema>;
+
+/** What the team sees of a deal's review. */
+export const dealReviewSchema = z
+  .object({
+    state: z.enum(REVIEW_STATES),
+    thread: z.array(commentSchema),
+    links: z.array(z.object({ id: z.string(), contactEmail: z.string(), expiresAt: z.string(), revokedAt: z.string().nullable(), createdAt: z.string() })),
+  })
+  .meta({ id: "DealReview" });
+export type DealReviewDto = z.infer<typeof dealReviewSchema>;

@@ -21,7 +21,9 @@ import { loadClip, loadEpisode, loadMaterial, loadSegment, loadShot, loadStep, l
 import { getGapById, getRangeById } from "../../../db/queries/coverage";
 import { getRevisionById } from "../../../db/queries/script";
 import { getShootDayById } from "../../../db/queries/shoot-days";
-import { getDealById, getDeliverableById, getSponsorById } from "../../../db/queries/sponsors";
+import { getDealById, getDeliverableById, getGuestLinkById, getLiveGuestLinkByHash, getSponsorById } from "../../../db/queries/sponsors";
+import { hashToken } from "../infra/tokens";
+import type { Deal, GuestLink } from "../../../db/schema";
 
 async function channelOf(userId: string, rawId: string | undefined) {
   const channelId = parseId(rawId, "channel");
@@ -97,6 +99,7 @@ export const LOADERS = {
   shootDay: { param: "shootDayId", load: byChannelRow("shoot-day", "shoot day", getShootDayById, (r) => ({ shootDay: r })) },
   sponsor: { param: "sponsorId", load: byChannelRow("sponsor", "sponsor", getSponsorById, (r) => ({ sponsor: r })) },
   deal: { param: "dealId", load: byChannelRow("deal", "deal", getDealById, (r) => ({ deal: r })) },
+  reviewLink: { param: "reviewLinkId", load: byChannelRow("review-link", "review link", getGuestLinkById, (r) => ({ link: r.link })) },
   deliverable: { param: "deliverableId", load: byChannelRow("deliverable", "deliverable", getDeliverableById, (r) => ({ deliverable: r.deliverable })) },
 } as const;
 
@@ -132,7 +135,11 @@ export type ChannelCtx<L extends LoadKind, B, Q> = Loaded<L> & {
   query: Out<Q>;
 };
 
-export type BuiltSpec = { kind: "channel"; load: LoadKind; param: string; action: Action | readonly Action[]; body?: z.ZodType; query?: z.ZodType } | { kind: "user"; body?: z.ZodType; query?: z.ZodType } | { kind: "public"; body?: z.ZodType; query?: z.ZodType };
+export type BuiltSpec =
+  | { kind: "channel"; load: LoadKind; param: string; action: Action | readonly Action[]; body?: z.ZodType; query?: z.ZodType }
+  | { kind: "user"; body?: z.ZodType; query?: z.ZodType }
+  | { kind: "public"; body?: z.ZodType; query?: z.ZodType }
+  | { kind: "guest"; body?: z.ZodType; query?: z.ZodType };
 type Handler = ((req: Request, ctx: { params: Promise<any> }) => Promise<Response>) & { spec: BuiltSpec };
 
 /** A route on one channel's record. */
@@ -187,4 +194,26 @@ export function publicRoute<B extends z.ZodType | undefined = undefined, Q exten
     },
   );
   return Object.assign(fn, { spec: { kind: "public" as const, body: spec.body, query: spec.query } });
+}
+
+const GUEST_TOKEN = /^[A-Za-z0-9_-]{32,64}$/;
+
+/**
+ * A route for a sponsor's contact holding a review link: no session; the
+ * link's secret token in the path is the key, and it reaches exactly one
+ * deal. An unknown, expired or revoked link is "not found".
+ */
+export function guestRoute<B extends z.ZodType | undefined = undefined>(
+  spec: { body?: B; what?: string },
+  handler: (ctx: { req: Request; link: GuestLink; deal: Deal; body: Out<B>; params: Record<string, string> }) => Promise<Response>,
+): Handler {
+  const fn = route<Record<string, string>>(async (req, params) => {
+    const token = params.token ?? "";
+    const found = GUEST_TOKEN.test(token) ? await getLiveGuestLinkByHash({ hash: hashToken(token) }) : null;
+    if (!found) throw new AppError("not_found:review-link", "This review link has expired or was withdrawn. Ask the channel for a new one.");
+    assertContentType(req);
+    const body = (spec.body ? await parseBody(req, spec.body, spec.what) : undefined) as Out<B>;
+    return handler({ req, link: found.link, deal: found.deal, body, params });
+  });
+  return Object.assign(fn, { spec: { kind: "guest" as const, body: spec.body } });
 }

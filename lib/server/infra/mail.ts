@@ -16,7 +16,7 @@ function transport(): Transporter {
 
 /** What sent a message: the local mail fake files it by these, so a channel's dev mailbox shows only its own mail. */
 export interface MailTag {
-  kind: "invitation" | "password_reset" | "call_sheet";
+  kind: "invitation" | "password_reset" | "call_sheet" | "review_link";
   channelId?: string;
   refId?: string;
 }

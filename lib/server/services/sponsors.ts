@@ -3,8 +3,11 @@ import "server-only";
 import type { DealCreate, DealUpdate, DeliverableCreate, SponsorCreate } from "../../schemas/sponsors";
 import { AppError } from "../http/errors";
 import { db, type Tx } from "../../../db/client";
-import type { Deal, Sponsor } from "../../../db/schema";
-import { channelOwns, deleteDeliverableRow, insertDeal, insertDeliverable, insertSponsor, replaceContacts, replaceDealEpisodes, replaceDealTools, updateDealRow, updateSponsorRow } from "../../../db/queries/sponsors";
+import type { Deal, GuestLink, Sponsor } from "../../../db/schema";
+import { channelOwns, deleteDeliverableRow, insertDeal, insertDeliverable, insertGuestLink, insertReviewComment, insertSponsor, replaceContacts, replaceDealEpisodes, replaceDealTools, revokeGuestLinkRow, updateDealRow, updateSponsorRow } from "../../../db/queries/sponsors";
+import { newToken } from "../infra/tokens";
+import { appUrl, sendMail } from "../infra/mail";
+import { dealScript } from "../views/sponsors";
 
 export async function createSponsor({ channelId, input }: { channelId: string; input: SponsorCreate }) {
   return db().transaction(async (tx) => {
@@ -74,4 +77,42 @@ export async function addDeliverable({ deal, input }: { deal: Deal; input: Deliv
 
 export async function removeDeliverable({ id }: { id: string }) {
   return db().transaction((tx) => deleteDeliverableRow(tx, id));
+}
+
+/** Makes a review link for one deal and mails it to the sponsor's contact; the token is shown only in the mail. */
+export async function sendReviewLink({ deal, userId, contactEmail, days }: { deal: Deal; userId: string; contactEmail: string; days: number }) {
+  const { token, hash } = newToken();
+  const expiresAt = new Date(Date.now() + days * 86_400_000);
+  const link = await db().transaction(async (tx) => {
+    const row = await insertGuestLink(tx, { dealId: deal.id, tokenHash: hash, contactEmail, expiresAt, createdBy: userId });
+    if (deal.status === "proposed" || deal.status === "signed") await updateDealRow(tx, deal.id, { status: "in_review" });
+    return row;
+  });
+  const url = appUrl(`/review/${token}`);
+  await sendMail({
+    to: contactEmail,
+    subject: `Please review: ${deal.title}`,
+    text: `Hello,\n\nThe part of our episode that concerns you is ready to review: the script with its timing, the clips, and the checks of what we agreed.\n\n${url}\n\nThe link works until ${expiresAt.toISOString().slice(0, 10)} and shows only this deal. Approve it, or tell us what should change.\n`,
+    tag: { kind: "review_link", channelId: deal.channelId, refId: link.id },
+  });
+  return { link, url };
+}
+
+export async function revokeReviewLink({ id }: { id: string }) {
+  return db().transaction((tx) => revokeGuestLinkRow(tx, id));
+}
+
+/** The sponsor's decision through their link, recorded against the script as it is now. */
+export async function recordGuestDecision({ deal, link, decision, comment }: { deal: Deal; link: GuestLink; decision: "approved" | "changes_requested"; comment: string }) {
+  const { fingerprint } = await dealScript(deal);
+  return db().transaction(async (tx) => {
+    const row = await insertReviewComment(tx, { dealId: deal.id, guestLinkId: link.id, decision, body: comment, scriptFingerprint: fingerprint });
+    await updateDealRow(tx, deal.id, { status: decision === "approved" ? "approved" : "in_review" });
+    return row;
+  });
+}
+
+export async function recordTeamReply({ deal, userId, body }: { deal: Deal; userId: string; body: string }) {
+  const { fingerprint } = await dealScript(deal);
+  return db().transaction((tx) => insertReviewComment(tx, { dealId: deal.id, userId, body, scriptFingerprint: fingerprint }));
 }

@@ -1,14 +1,17 @@
 import "server-only";
 /** Sponsors, deals and the episode's sponsor checks as the API shows them. */
 import { eq } from "drizzle-orm";
-import { DELIVERABLE_LABELS, runChecks, type CheckInput, type DeliverableKind } from "../../sponsor-checks";
+import crypto from "node:crypto";
+import { DELIVERABLE_LABELS, mentionSegments, runChecks, type CheckInput, type DeliverableKind } from "../../sponsor-checks";
 import { allowsDropFrame } from "../../frame-rate";
-import { rateOf } from "../../timecode";
-import type { DealDto, SponsorChecksDto, SponsorDto } from "../../schemas/sponsors";
+import { formatTimecode, rateOf } from "../../timecode";
+import type { DealDto, DealReviewDto, GuestReviewDto, REVIEW_STATES, SponsorChecksDto, SponsorDto } from "../../schemas/sponsors";
 import { scriptViewFor } from "./script";
 import { db } from "../../../db/client";
-import { publishPackages, type Deal, type Episode, type Sponsor } from "../../../db/schema";
-import { dealLinks, listContactsBySponsors, listDealsByEpisode, listSponsorsByChannel } from "../../../db/queries/sponsors";
+import { publishPackages, type Deal, type Episode, type GuestLink, type Sponsor } from "../../../db/schema";
+import { dealLinks, listContactsBySponsors, listDealsByEpisode, listGuestLinks, listReviewComments, listSponsorsByChannel } from "../../../db/queries/sponsors";
+import { getEpisodeById } from "../../../db/queries/episodes";
+import { presignGet } from "../../../storage/presign";
 import { listStepsByEpisode } from "../../../db/queries/build";
 import { listToolsByChannel } from "../../../db/queries/tools";
 import { listRangesByEpisode } from "../../../db/queries/coverage";
@@ -94,5 +97,76 @@ export async function sponsorChecksFor(episode: Episode): Promise<SponsorChecksD
       label: r.kind === "undisclosed_connection" ? "Material connection disclosed in the video" : DELIVERABLE_LABELS[r.kind as DeliverableKind],
       sponsorName: r.dealId ? (dealSponsor.get(r.dealId) ?? null) : (input.tools.find((t) => t.id === r.toolId)?.sponsorName ?? null),
     })),
+  };
+}
+
+/** The deal's mention segments in every episode of the deal, with the fingerprint of their versions. */
+export async function dealScript(deal: Deal) {
+  const links = await dealLinks(db(), [deal.id]);
+  const episodeIds = links.episodes.map((e) => e.episodeId);
+  const out: { episode: Episode; input: CheckInput; mentions: CheckInput["segments"]; versions: string[] }[] = [];
+  for (const id of episodeIds) {
+    const episode = await getEpisodeById({ id });
+    if (!episode) continue;
+    const { input } = await checkInputFor(episode);
+    const d = input.deals.find((x) => x.id === deal.id);
+    if (!d) continue;
+    const mentions = mentionSegments(d, input.segments, input.tools);
+    const view = await scriptViewFor(episode);
+    out.push({ episode, input, mentions, versions: mentions.map((m) => `${m.id}:${view.segments.find((s) => s.id === m.id)?.version ?? 0}`) });
+  }
+  const fingerprint = crypto.createHash("sha256").update(out.flatMap((o) => o.versions).sort().join(",")).digest("hex");
+  return { parts: out, fingerprint };
+}
+
+/** Where the review stands: the last decision, reopened when the script changed after it. */
+export function reviewState(comments: { comment: { decision: string | null; scriptFingerprint: string } }[], links: number, fingerprint: string): (typeof REVIEW_STATES)[number] {
+  const last = [...comments].reverse().find((c) => c.comment.decision);
+  if (!last) return links ? "waiting" : "not_sent";
+  if (last.comment.scriptFingerprint !== fingerprint) return "reopened";
+  return last.comment.decision as "approved" | "changes_requested";
+}
+
+function threadOf(rows: Awaited<ReturnType<typeof listReviewComments>>, sponsorName: string, fingerprint: string) {
+  return rows.map((r) => ({
+    id: r.comment.id,
+    from: r.comment.userId ? (r.userName ?? "team") : `${sponsorName} (review link)`,
+    decision: r.comment.decision ?? null,
+    body: r.comment.body,
+    createdAt: r.comment.createdAt.toISOString(),
+    current: r.comment.scriptFingerprint === fingerprint,
+  }));
+}
+
+/** A sponsor contact's view through a review link: this deal's segments, checks and clips, nothing else of the channel. */
+export async function guestReviewFor(deal: Deal, link: GuestLink): Promise<GuestReviewDto> {
+  const [{ parts, fingerprint }, comments, links, sponsors] = await Promise.all([dealScript(deal), listReviewComments({ dealId: deal.id }), listGuestLinks({ dealId: deal.id }), listSponsorsByChannel({ channelId: deal.channelId, archived: true })]);
+  const sponsorName = sponsors.find((s) => s.id === deal.sponsorId)?.name ?? "";
+  const episodes = await Promise.all(
+    parts.map(async ({ episode, input, mentions }) => {
+      const tc = (f: number) => formatTimecode(f, input.rate);
+      const report = runChecks({ ...input, deals: input.deals.filter((d) => d.id === deal.id), deliverables: input.deliverables.filter((d) => d.dealId === deal.id) });
+      const dealToolIds = input.deals.find((d) => d.id === deal.id)?.toolIds ?? [];
+      const stepIds = new Set(input.steps.filter((s) => s.toolIds.some((t) => dealToolIds.includes(t))).map((s) => s.id));
+      const [clips, shots] = await Promise.all([listClipsByEpisode({ episodeId: episode.id }), listShotsByEpisode({ episodeId: episode.id })]);
+      const relevant = clips.filter((c) => c.state === "stored" && c.shotId && stepIds.has(shots.find((s) => s.id === c.shotId)?.stepId ?? ""));
+      return {
+        title: episode.title,
+        segments: mentions.map((m) => ({ id: m.id, kind: m.kind, text: m.text, start: tc(m.start), end: tc(m.end), seconds: Math.round(((m.end - m.start) * input.rate.den * 10) / input.rate.num) / 10 })),
+        checks: report.results.filter((r) => r.dealId === deal.id && r.deliverableId).map((r) => ({ label: DELIVERABLE_LABELS[r.kind as DeliverableKind], pass: r.pass, message: r.message })),
+        clips: await Promise.all(relevant.map(async (c) => ({ id: c.id, name: c.originalName, url: await presignGet(c.storageKey, 10 * 60) }))),
+      };
+    }),
+  );
+  return { sponsorName, dealTitle: deal.title, episodes, state: reviewState(comments, links.length, fingerprint), thread: threadOf(comments, sponsorName, fingerprint), expiresAt: link.expiresAt.toISOString() };
+}
+
+export async function dealReviewFor(deal: Deal): Promise<DealReviewDto> {
+  const [{ fingerprint }, comments, links, sponsors] = await Promise.all([dealScript(deal), listReviewComments({ dealId: deal.id }), listGuestLinks({ dealId: deal.id }), listSponsorsByChannel({ channelId: deal.channelId, archived: true })]);
+  const sponsorName = sponsors.find((s) => s.id === deal.sponsorId)?.name ?? "";
+  return {
+    state: reviewState(comments, links.length, fingerprint),
+    thread: threadOf(comments, sponsorName, fingerprint),
+    links: links.map((l) => ({ id: l.id, contactEmail: l.contactEmail, expiresAt: l.expiresAt.toISOString(), revokedAt: l.revokedAt ? l.revokedAt.toISOString() : null, createdAt: l.createdAt.toISOString() })),
   };
 }
