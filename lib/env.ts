@@ -9,7 +9,7 @@ const bool = z
   .enum(["true", "false", "1", "0", "yes", "no"])
   .transform((v) => v === "true" || v === "1" || v === "yes");
 
-export const LOCAL_PORTS = { postgres: 54329, s3: 54330, smtp: 54325 } as const;
+export const LOCAL_PORTS = { postgres: 54329, s3: 54330, smtp: 54325, payments: 54326 } as const;
 
 const envSchema = z.object({
   DATABASE_URL: z.url().default(`postgres://jigboard@127.0.0.1:${LOCAL_PORTS.postgres}/jigboard`),
@@ -34,6 +34,12 @@ const envSchema = z.object({
   SIGN_IN_WINDOW_SECONDS: z.coerce.number().int().min(10).default(900),
   /** Only behind a proxy that sets X-Forwarded-For: then the rightmost entry is the client. Otherwise the socket address counts. */
   TRUST_PROXY: bool.default(false),
+  /** The payments service (its official SDK). Defaults talk to the local fake that npm start runs. */
+  STRIPE_SECRET_KEY: z.string().min(1).default("sk_test_local"),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).default("whsec_local"),
+  STRIPE_API_HOST: z.string().min(1).optional(),
+  STRIPE_API_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  STRIPE_API_PROTOCOL: z.enum(["http", "https"]).optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -8,7 +8,7 @@ import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
 import { channelSchema, channelSettingsSchema, channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, invitationSchema, mailSchema, memberRolesSchema, memberSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
-import { dealReviewSchema, guestReviewSchema, reviewDecisionSchema, reviewLinkCreateSchema, reviewReplySchema, dealCreateSchema, dealSchema, dealUpdateSchema, deliverableCreateSchema, deliverableSchema, sponsorChecksSchema, sponsorCreateSchema, sponsorSchema, sponsorUpdateSchema } from "./schemas/sponsors";
+import { invoiceSchema, invoicesSchema, dealReviewSchema, guestReviewSchema, reviewDecisionSchema, reviewLinkCreateSchema, reviewReplySchema, dealCreateSchema, dealSchema, dealUpdateSchema, deliverableCreateSchema, deliverableSchema, sponsorChecksSchema, sponsorCreateSchema, sponsorSchema, sponsorUpdateSchema } from "./schemas/sponsors";
 import { callSheetSchema, callSheetSendSchema, daysAwayListSchema, daysAwaySchema, scheduleSchema, shootDayCreateSchema, shootDayListQuerySchema, shootDaySchema, shootDayUpdateSchema } from "./schemas/shoot";
 import { cutListSchema, materialCreateSchema, materialSchema, materialUpdateSchema, photoUploadSchema, planSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolSchema, toolUpdateSchema } from "./schemas/build";
 import { chaptersSchema, exportQuerySchema, rateSchema, readingRateSchema, scriptSchema, segmentCreateSchema, segmentJoinSchema, segmentOrderSchema, segmentSaveSchema, segmentSchema, segmentSplitSchema, segmentTimingSchema, timingQuerySchema, totalsSchema } from "./schemas/script";
@@ -139,6 +139,9 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/deals/{dealId}/review", summary: "Reply in the review thread (liaison, presenter, owner)", body: reviewReplySchema, response: dealReviewSchema, status: 201, errors: [400, 401, 403, 404] },
   { method: "get", path: "/api/review/{token}", summary: "Guest: the deal's segments, checks and clips through a review link (no session; the token is the key)", auth: false, response: guestReviewSchema, errors: [404] },
   { method: "post", path: "/api/review/{token}/decision", summary: "Guest: approve, or request changes with a comment", auth: false, body: reviewDecisionSchema, response: guestReviewSchema, status: 201, errors: [400, 404] },
+  { method: "post", path: "/api/deals/{dealId}/invoice", summary: "Issue the deal's invoice through the payments service (liaison, owner)", response: z.object({ invoice: invoiceSchema }), status: 201, errors: [401, 403, 404, 422, 502] },
+  { method: "get", path: "/api/channels/{channelId}/invoices", summary: "Invoices with totals per sponsor and per month (liaison, owner)", response: invoicesSchema, errors: [401, 403, 404] },
+  { method: "post", path: "/api/payments/webhook", summary: "Payments service webhook: signature verified on the raw body; idempotent", auth: false, response: z.object({ received: z.boolean(), outcome: z.string() }), errors: [400] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];

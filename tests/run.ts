@@ -26,7 +26,7 @@ const playwrightArgs = process.argv.slice(2).filter((a) => !SUITES.includes(a));
 const want = (suite: string) => only.length === 0 || only.includes(suite);
 
 // Tests always use their own local services, never a configured real one.
-for (const k of ["DATABASE_URL", "S3_ENDPOINT", "SMTP_URL", "NEXTAUTH_SECRET", "NEXTAUTH_URL"]) delete process.env[k];
+for (const k of ["DATABASE_URL", "S3_ENDPOINT", "SMTP_URL", "NEXTAUTH_SECRET", "NEXTAUTH_URL", "STRIPE_SECRET_KEY", "STRIPE_WEBHOOK_SECRET"]) delete process.env[k];
 
 function run(cmd: string, args: string[], env: NodeJS.ProcessEnv): Promise<number> {
   return new Promise((resolve) => {
@@ -68,7 +68,8 @@ async function main() {
   fs.mkdirSync(artifacts, { recursive: true });
   const services = await startLocalServices({
     dataRoot,
-    ports: { postgres: 54339, s3: 54340, smtp: 54335 },
+    ports: { postgres: 54339, s3: 54340, smtp: 54335, payments: 54336 },
+    appUrl: `http://127.0.0.1:${appPort}`,
     database: "jigboard_test",
     fast: true,
     log: (m) => console.log(`[test] ${m}`),

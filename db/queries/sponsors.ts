@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Q, type Tx } from "../client";
-import { dealEpisodes, dealTools, deals, deliverables, episodes, guestLinks, reviewComments, sponsorContacts, sponsors, tools, users, type Deal } from "../schema";
+import { dealEpisodes, dealTools, deals, deliverables, episodes, guestLinks, invoices, paymentEvents, reviewComments, sponsorContacts, sponsors, tools, users, type Deal } from "../schema";
 
 /** Rows of sponsors, deals and deliverables. Rules live in lib/server/services/sponsors.ts. */
 
@@ -174,6 +174,38 @@ export async function listReviewComments({ dealId }: { dealId: string }) {
     .leftJoin(users, eq(users.id, reviewComments.userId))
     .where(eq(reviewComments.dealId, dealId))
     .orderBy(asc(reviewComments.createdAt));
+}
+
+
+export async function insertInvoice(tx: Q, v: typeof invoices.$inferInsert) {
+  const [row] = await tx.insert(invoices).values(v).returning();
+  return row!;
+}
+
+export async function updateInvoiceRow(tx: Q, id: string, set: Partial<typeof invoices.$inferInsert>) {
+  const [row] = await tx.update(invoices).set(set).where(eq(invoices.id, id)).returning();
+  return row ?? null;
+}
+
+export async function getInvoiceByProviderId(q: Q, providerId: string) {
+  const [row] = await q.select().from(invoices).where(eq(invoices.providerId, providerId)).limit(1);
+  return row ?? null;
+}
+
+/** Records an event id once; false when it was seen before (the same event twice changes nothing). */
+export async function recordPaymentEvent(tx: Tx, id: string, type: string) {
+  const rows = await tx.insert(paymentEvents).values({ id, type }).onConflictDoNothing().returning();
+  return rows.length > 0;
+}
+
+export async function listInvoicesByChannel({ channelId }: { channelId: string }) {
+  return db()
+    .select({ invoice: invoices, dealTitle: deals.title, sponsorId: deals.sponsorId, sponsorName: sponsors.name })
+    .from(invoices)
+    .innerJoin(deals, eq(deals.id, invoices.dealId))
+    .innerJoin(sponsors, eq(sponsors.id, deals.sponsorId))
+    .where(eq(deals.channelId, channelId))
+    .orderBy(asc(invoices.createdAt));
 }
 
 export type { Deal };

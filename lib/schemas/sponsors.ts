@@ -206,3 +206,14 @@ export const dealReviewSchema = z
   })
   .meta({ id: "DealReview" });
 export type DealReviewDto = z.infer<typeof dealReviewSchema>;
+
+// ---- Invoices
+
+export const invoiceSchema = z
+  .object({ id: z.string(), dealId: z.string(), dealTitle: z.string().optional(), sponsorName: z.string().optional(), amountMinor: z.number(), currency: z.string(), status: z.enum(["draft", "open", "paid", "void"]), hostedUrl: z.string().nullable(), issuedAt: z.string().nullable(), paidAt: z.string().nullable() })
+  .meta({ id: "Invoice" });
+const totalSchema = z.object({ currency: z.string(), invoicedMinor: z.number(), paidMinor: z.number() });
+export const invoicesSchema = z
+  .object({ invoices: z.array(invoiceSchema), totals: z.object({ bySponsor: z.array(totalSchema.extend({ sponsorName: z.string() })), byMonth: z.array(totalSchema.extend({ month: z.string() })) }) })
+  .meta({ id: "Invoices" });
+export type InvoicesDto = z.infer<typeof invoicesSchema>;

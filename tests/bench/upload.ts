@@ -57,7 +57,7 @@ export async function uploadBench() {
   for (const k of ["DATABASE_URL", "S3_ENDPOINT", "SMTP_URL"]) delete process.env[k];
   const dataRoot = path.join(root, ".test-data", "bench");
   fs.rmSync(dataRoot, { recursive: true, force: true });
-  const services = await startLocalServices({ dataRoot, ports: { postgres: 54349, s3: 54350, smtp: 54345 }, database: "jigboard_bench", fast: true, log: () => {} });
+  const services = await startLocalServices({ dataRoot, ports: { postgres: 54349, s3: 54350, smtp: 54345, payments: 54346 }, database: "jigboard_bench", fast: true, log: () => {} });
   let app: ChildProcess | undefined;
   try {
     const db = drizzle(new pg.Pool({ connectionString: services.env.DATABASE_URL }), { schema });

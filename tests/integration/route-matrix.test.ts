@@ -13,7 +13,7 @@ import { listRoutes, paramsFor, recordsOfEveryKind, type RouteEntry } from "../s
 
 // next-auth's own handler; it throttles and refuses odd input itself (see http.test.ts).
 const EXEMPT = new Set(["auth/[...nextauth]/route.ts"]);
-const PUBLIC = new Set(["health/route.ts", "openapi.json/route.ts", "invitations/accept/route.ts", "password-reset/route.ts", "password-reset/confirm/route.ts", "calendar/[token]/route.ts"]);
+const PUBLIC = new Set(["health/route.ts", "openapi.json/route.ts", "invitations/accept/route.ts", "password-reset/route.ts", "password-reset/confirm/route.ts", "calendar/[token]/route.ts", "payments/webhook/route.ts"]);
 
 let entries: RouteEntry[] = [];
 let w: Awaited<ReturnType<typeof makeWorld>>;

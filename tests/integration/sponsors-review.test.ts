@@ -69,6 +69,9 @@ describe("sponsor review link", () => {
     const team = await call(teamRoute.GET as never, { params: { dealId: dealA.id }, user: w.members.presenter });
     expect(team.json.state).toBe("approved");
     expect(team.json.thread[0]).toMatchObject({ decision: "approved", body: "Looks right.", current: true });
+    // The other deal on the same episode is untouched.
+    expect((await db().select().from(deals).where(eq(deals.id, dealB.id)))[0]!.status).toBe("proposed");
+    expect((await call(teamRoute.GET as never, { params: { dealId: dealB.id }, user: w.members.owner })).json.thread).toEqual([]);
     await call(segmentRoute.PATCH as never, { method: "PATCH", params: { segmentId: read.id }, user: w.members.presenter, body: { version: read.version, text: "This video is sponsored by Alder Glue Works: thirty minutes of open time, then clamp." } });
     const again = await call(guestRoute.GET as never, { params: { token }, user: null });
     expect(again.json.state).toBe("reopened");

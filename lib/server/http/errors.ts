@@ -9,6 +9,8 @@ const STATUS = {
   unprocessable: 422,
   rate_limited: 429,
   internal: 500,
+  /** A service we depend on (payments) refused or did not answer. */
+  unavailable: 502,
 } as const;
 export type ErrorKind = keyof typeof STATUS;
 

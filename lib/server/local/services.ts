@@ -1,7 +1,8 @@
 /**
  * Starts whichever local services the environment does not point elsewhere:
  * PostgreSQL (DATABASE_URL), the S3 fake (S3_ENDPOINT) and the SMTP fake
- * (SMTP_URL). Used by `npm start` and by the test harness. Node-only.
+ * (SMTP_URL) and the payments fake (STRIPE_SECRET_KEY). Used by `npm start`
+ * and by the test harness. Node-only.
  */
 import path from "node:path";
 import fs from "node:fs";
@@ -9,12 +10,14 @@ import crypto from "node:crypto";
 import { startLocalPostgres } from "./postgres";
 import { startLocalS3 } from "../../../storage/local/s3";
 import { startLocalSmtp } from "./smtp";
+import { startLocalPayments } from "./payments";
 import { runMigrations } from "../../../db/migrate";
 
 export interface ServicePorts {
   postgres: number;
   s3: number;
   smtp: number;
+  payments: number;
 }
 
 export interface StartedServices {
@@ -29,6 +32,8 @@ export async function startLocalServices(opts: {
   database: string;
   fast?: boolean;
   log?: (msg: string) => void;
+  /** Where the payments fake posts its signed webhooks (the app's address). */
+  appUrl?: string;
 }): Promise<StartedServices> {
   const log = opts.log ?? ((m: string) => console.log(m));
   const stops: (() => Promise<void>)[] = [];
@@ -73,6 +78,18 @@ export async function startLocalServices(opts: {
       log(`[smtp] fake mail server on ${smtp.url}; owners read what it receives under Dev mailbox in the app`);
     } else if (!process.env.DEV_MAILBOX) {
       out.DEV_MAILBOX = "false";
+    }
+
+    if (!process.env.STRIPE_SECRET_KEY) {
+      const secret = process.env.STRIPE_WEBHOOK_SECRET ?? `whsec_local_${crypto.randomBytes(12).toString("hex")}`;
+      const pay = await startLocalPayments({ port: opts.ports.payments, webhookUrl: `${opts.appUrl ?? "http://127.0.0.1:3000"}/api/payments/webhook`, webhookSecret: secret });
+      stops.push(() => pay.stop());
+      out.STRIPE_SECRET_KEY = "sk_test_local";
+      out.STRIPE_WEBHOOK_SECRET = secret;
+      out.STRIPE_API_HOST = "127.0.0.1";
+      out.STRIPE_API_PORT = String(pay.port);
+      out.STRIPE_API_PROTOCOL = "http";
+      log(`[payments] fake payments service on ${pay.url}`);
     }
 
     return {

@@ -19,7 +19,7 @@ const port = Number(process.env.PORT ?? 3000);
 const dev = process.argv.includes("--dev");
 
 async function main() {
-  const services = await startLocalServices({ dataRoot, ports: LOCAL_PORTS, database: "jigboard" });
+  const services = await startLocalServices({ dataRoot, ports: LOCAL_PORTS, database: "jigboard", appUrl: process.env.NEXTAUTH_URL ?? `http://127.0.0.1:${port}` });
   const running: { child?: ReturnType<typeof spawn>; worker?: ReturnType<typeof spawn> } = {};
   let stopping = false;
   const shutdown = async (code = 0) => {

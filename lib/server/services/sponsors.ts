@@ -4,10 +4,11 @@ import type { DealCreate, DealUpdate, DeliverableCreate, SponsorCreate } from ".
 import { AppError } from "../http/errors";
 import { db, type Tx } from "../../../db/client";
 import type { Deal, GuestLink, Sponsor } from "../../../db/schema";
-import { channelOwns, deleteDeliverableRow, insertDeal, insertDeliverable, insertGuestLink, insertReviewComment, insertSponsor, replaceContacts, replaceDealEpisodes, replaceDealTools, revokeGuestLinkRow, updateDealRow, updateSponsorRow } from "../../../db/queries/sponsors";
+import { channelOwns, deleteDeliverableRow, getInvoiceByProviderId, insertDeal, insertInvoice, recordPaymentEvent, updateInvoiceRow, insertDeliverable, insertGuestLink, insertReviewComment, insertSponsor, replaceContacts, replaceDealEpisodes, replaceDealTools, revokeGuestLinkRow, updateDealRow, updateSponsorRow } from "../../../db/queries/sponsors";
 import { newToken } from "../infra/tokens";
 import { appUrl, sendMail } from "../infra/mail";
 import { dealScript } from "../views/sponsors";
+import { payments } from "../infra/payments";
 
 export async function createSponsor({ channelId, input }: { channelId: string; input: SponsorCreate }) {
   return db().transaction(async (tx) => {
@@ -115,4 +116,45 @@ export async function recordGuestDecision({ deal, link, decision, comment }: { d
 export async function recordTeamReply({ deal, userId, body }: { deal: Deal; userId: string; body: string }) {
   const { fingerprint } = await dealScript(deal);
   return db().transaction((tx) => insertReviewComment(tx, { dealId: deal.id, userId, body, scriptFingerprint: fingerprint }));
+}
+
+/**
+ * Issues the invoice for a paid deal through the payments service: customer,
+ * invoice (sent for payment within 30 days), its one line, finalize, send.
+ * The row is written first, so a failure on the way leaves a draft to retry, never a lost charge.
+ */
+export async function issueInvoice({ deal, sponsor }: { deal: Deal; sponsor: Sponsor & { email: string } }) {
+  if (deal.kind !== "paid_integration" && deal.kind !== "affiliate") throw new AppError("unprocessable:invoice.kind", "Only paid deals are invoiced; a gifted or loaned tool has nothing to bill.", { fields: { kind: ["not a paid deal"] } });
+  if (deal.feeMinor <= 0) throw new AppError("unprocessable:invoice.fee", "Set the deal's fee before invoicing it.", { fields: { feeMinor: ["the fee is zero"] } });
+  if (!sponsor.email) throw new AppError("unprocessable:invoice.contact", "Give the sponsor a contact e-mail to send the invoice to.", { fields: { contacts: ["no contact e-mail"] } });
+  const row = await db().transaction((tx) => insertInvoice(tx, { dealId: deal.id, amountMinor: deal.feeMinor, currency: deal.currency, status: "draft" }));
+  try {
+    const api = payments();
+    const customer = await api.customers.create({ name: sponsor.name, email: sponsor.email, metadata: { jigboardSponsor: sponsor.id } });
+    const draft = await api.invoices.create({ customer: customer.id, collection_method: "send_invoice", days_until_due: 30, currency: deal.currency.toLowerCase(), description: deal.title, metadata: { jigboardInvoice: row.id } });
+    await api.invoiceItems.create({ customer: customer.id, invoice: draft.id, amount: deal.feeMinor, currency: deal.currency.toLowerCase(), description: deal.title });
+    const open = await api.invoices.finalizeInvoice(draft.id!);
+    await api.invoices.sendInvoice(open.id!);
+    return await db().transaction(async (tx) => {
+      const done = (await updateInvoiceRow(tx, row.id, { providerId: open.id!, providerCustomerId: customer.id, hostedUrl: open.hosted_invoice_url ?? null, status: "open", issuedAt: new Date() }))!;
+      await updateDealRow(tx, deal.id, { status: "invoiced" });
+      return done;
+    });
+  } catch (e) {
+    if (e instanceof AppError) throw e;
+    throw new AppError("unavailable:payments", `The payments service refused or did not answer (${(e as Error).message}). The invoice is kept as a draft; try again.`);
+  }
+}
+
+/** A verified payments event: an invoice paid marks it and its deal paid. The same event twice changes nothing. */
+export async function handlePaymentEvent(event: { id: string; type: string; data: { object: { id?: string; object?: string } } }) {
+  return db().transaction(async (tx) => {
+    if (!(await recordPaymentEvent(tx, event.id, event.type))) return "duplicate" as const;
+    if (event.type !== "invoice.paid" || !event.data.object.id) return "ignored" as const;
+    const inv = await getInvoiceByProviderId(tx, event.data.object.id);
+    if (!inv) return "unknown" as const;
+    await updateInvoiceRow(tx, inv.id, { status: "paid", paidAt: new Date() });
+    await updateDealRow(tx, inv.dealId, { status: "paid" });
+    return "paid" as const;
+  });
 }
