@@ -8,7 +8,7 @@ import { Button } from "@/components/ui/button";
 import { CheckboxLabel } from "@/components/ui/checkbox";
 import { Notice, SelectField, TextField } from "@/components/ui/field";
 import { DEAL_KINDS, DEAL_KIND_LABELS, DELIVERABLE_KINDS, DELIVERABLE_LABELS, type DeliverableKind } from "@/lib/sponsor-checks";
-import { DEAL_STATUSES, DEAL_STATUS_LABELS, type DealDto, type DealReviewDto, type DealStatus, type SponsorDto } from "@/lib/schemas/sponsors";
+import { DEAL_STATUSES, DEAL_STATUS_LABELS, type DealDto, type DealReviewDto, type DealStatus, type InvoicesDto, type SponsorDto } from "@/lib/schemas/sponsors";
 import { formatMoney } from "@/lib/materials";
 
 interface Props {
@@ -30,7 +30,8 @@ export function SponsorsView(p: Props) {
   const write = useWrite({ scope: `sponsors:${p.channelId}` });
   const sponsors = useQuery({ queryKey: ["sponsors", p.channelId], queryFn: () => fetchJson<{ sponsors: SponsorDto[] }>(`/api/channels/${p.channelId}/sponsors`) });
   const deals = useQuery({ queryKey: ["deals", p.channelId], queryFn: () => fetchJson<{ deals: DealDto[] }>(`/api/channels/${p.channelId}/deals`) });
-  const refresh = () => Promise.all([qc.invalidateQueries({ queryKey: ["sponsors", p.channelId] }), qc.invalidateQueries({ queryKey: ["deals", p.channelId] })]);
+  const invoices = useQuery({ queryKey: ["invoices", p.channelId], queryFn: () => fetchJson<InvoicesDto>(`/api/channels/${p.channelId}/invoices`), enabled: p.canManage });
+  const refresh = () => Promise.all([qc.invalidateQueries({ queryKey: ["sponsors", p.channelId] }), qc.invalidateQueries({ queryKey: ["deals", p.channelId] }), qc.invalidateQueries({ queryKey: ["invoices", p.channelId] })]);
   const [msg, setMsg] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const [sp, setSp] = useState({ name: "", website: "", contactName: "", contactEmail: "" });
   const [deal, setDeal] = useState({ sponsorId: "", title: "", kind: "paid_integration", fee: "", status: "proposed" as DealStatus, publishFrom: "", publishTo: "", returnBy: "", episodeIds: [] as string[], toolIds: [] as string[] });
@@ -91,7 +92,7 @@ export function SponsorsView(p: Props) {
         </h2>
         <ul className="space-y-3">
           {dealList.map((d) => (
-            <DealItem key={d.id} deal={d} {...p} onChanged={refresh} />
+            <DealItem key={d.id} deal={d} {...p} invoices={(invoices.data?.invoices ?? []).filter((i) => i.dealId === d.id)} onChanged={refresh} />
           ))}
           {dealList.length ? null : <li className="text-sm text-walnut-700">No deals yet.</li>}
         </ul>
@@ -173,7 +174,7 @@ export function SponsorsView(p: Props) {
   );
 }
 
-function DealItem({ deal, canManage, episodes, tools, channelId, onChanged }: Props & { deal: DealDto; onChanged: () => Promise<unknown> }) {
+function DealItem({ deal, canManage, episodes, tools, channelId, invoices, onChanged }: Props & { deal: DealDto; invoices: InvoicesDto["invoices"]; onChanged: () => Promise<unknown> }) {
   const write = useWrite({ scope: `sponsors:${channelId}` });
   const [kind, setKind] = useState<DeliverableKind>("spoken_disclosure");
   const [value, setValue] = useState("");
@@ -185,7 +186,7 @@ function DealItem({ deal, canManage, episodes, tools, channelId, onChanged }: Pr
       </p>
       <p className="text-walnut-700">
         {DEAL_KIND_LABELS[deal.kind]} · {DEAL_STATUS_LABELS[deal.status]}
-        {deal.feeMinor !== null ? ` · ${formatMoney(deal.feeMinor, deal.currency)}` : ""}
+        {deal.feeMinor !== null && (deal.kind === "paid_integration" || deal.kind === "affiliate") ? ` · ${formatMoney(deal.feeMinor, deal.currency)}` : ""}
         {deal.publishFrom || deal.publishTo ? ` · publish ${deal.publishFrom ?? "…"} to ${deal.publishTo ?? "…"}` : ""}
         {deal.returnBy ? ` · return by ${deal.returnBy}` : ""}
       </p>
@@ -215,6 +216,30 @@ function DealItem({ deal, canManage, episodes, tools, channelId, onChanged }: Pr
         ))}
       </ul>
       <ReviewPanel deal={deal} canManage={canManage} channelId={channelId} />
+      {canManage && (deal.kind === "paid_integration" || deal.kind === "affiliate") ? (
+        <div className="mt-2 flex flex-wrap items-center gap-2" data-testid="deal-invoices">
+          {invoices.map((i) => (
+            <span key={i.id} className={`rounded-plank border px-2 py-0.5 ${i.status === "paid" ? "border-pass-600 text-pass-700" : "border-timber-300"}`}>
+              Invoice {formatMoney(i.amountMinor, i.currency)}: {i.status === "paid" ? "paid" : i.status === "open" ? "sent, not paid yet" : i.status}
+            </span>
+          ))}
+          {invoices.some((i) => i.status === "open" || i.status === "paid") ? null : (
+            <Button
+              onClick={async () => {
+                try {
+                  await write(`/api/deals/${deal.id}/invoice`, "POST");
+                  setError(null);
+                } catch (err) {
+                  setError(named(err));
+                }
+                await onChanged();
+              }}
+            >
+              Issue invoice
+            </Button>
+          )}
+        </div>
+      ) : null}
       {canManage ? (
         <form
           aria-label={`New deliverable for ${deal.title}`}

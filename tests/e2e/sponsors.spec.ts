@@ -58,6 +58,46 @@ test("liaison sets up a deal, sees a failing check against the script, and sees 
   await expect(page.getByTestId("checks-state")).toContainText("Every promise is kept");
   await shot(page, "sponsor-checks");
 
+  // A review link for the sponsor's contact, read from the dev mailbox by the owner; the guest approves.
+  await page.goto(`/c/${channelId}/sponsors`);
+  const review = deal.getByRole("form", { name: "Send a review link for Oil read in the spice rack" });
+  await review.getByLabel("Sponsor contact's e-mail").fill("tess@marlowe-finishes.example");
+  await review.getByRole("button", { name: "Send review link" }).click();
+  await expect(deal.getByTestId("deal-review")).toContainText("Review: waiting for the sponsor");
+  const owner = await browser.newContext();
+  const op = await owner.newPage();
+  await new SignInPage(op).signIn("owner@jigboard.example");
+  await op.goto(`/c/${channelId}/mailbox`);
+  const href = await op.getByTestId("mail-message").filter({ hasText: "Please review: Oil read in the spice rack" }).getByRole("link").first().getAttribute("href");
+  await owner.close();
+  const guest = await browser.newContext();
+  const gp = await guest.newPage();
+  await gp.goto(href!);
+  await expect(gp.getByRole("article", { name: "Sponsor review" })).toContainText("food-safe once cured");
+  await expect(gp.getByRole("article", { name: "Sponsor review" })).not.toContainText("800");
+  await gp.getByRole("button", { name: "Approve" }).click();
+  await expect(gp.getByTestId("review-state")).toContainText("You approved this version.");
+  await shot(gp, "sponsor-review-guest");
+  await guest.close();
+  await page.reload();
+  await expect(deal.getByTestId("deal-review")).toContainText("Review: approved by the sponsor");
+
+  // The invoice goes out through the payments service; the paid webhook comes back.
+  await deal.getByRole("button", { name: "Issue invoice" }).click();
+  await expect(deal.getByTestId("deal-invoices")).toContainText("Invoice $800.00: sent, not paid yet");
+  const { invoices } = (await (await page.request.get(`/api/channels/${channelId}/invoices`)).json()) as { invoices: { dealTitle: string; id: string }[] };
+  const pg = await import("pg");
+  const client = new pg.default.Client({ connectionString: process.env.DATABASE_URL });
+  await client.connect();
+  const provider = (await client.query("select provider_id from invoices where id = $1", [invoices.find((i) => i.dealTitle === "Oil read in the spice rack")!.id])).rows[0].provider_id as string;
+  await client.end();
+  const paid = await page.request.post(`http://127.0.0.1:${process.env.STRIPE_API_PORT}/test/invoices/${provider}/pay`, { headers: { authorization: "Bearer sk_test_local" } });
+  expect((await paid.json()).webhookStatus).toBe(200);
+  await page.reload();
+  await expect(deal.getByTestId("deal-invoices")).toContainText("Invoice $800.00: paid");
+  await expect(deal).toContainText("Paid");
+  await shot(page, "sponsors-deal-paid");
+
   // The editor reads the deal but not its fee.
   const editor = await browser.newContext();
   const ep = await editor.newPage();

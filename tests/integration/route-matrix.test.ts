@@ -30,6 +30,13 @@ async function callAs(e: RouteEntry, user: { id: string } | null, channelId: str
   return call(e.handler as never, { method: e.method, params, user, path: "/x", ...(write ? { body: {} } : {}) });
 }
 
+/** True when any feeMinor in the answer carries a number. */
+function hasFee(v: unknown): boolean {
+  if (Array.isArray(v)) return v.some(hasFee);
+  if (v && typeof v === "object") return Object.entries(v).some(([k, x]) => (k === "feeMinor" && typeof x === "number") || hasFee(x));
+  return false;
+}
+
 const allowed = (action: Action | readonly Action[], roles: readonly string[]) => (typeof action === "string" ? [action] : action).some((a) => can(roles as never, a));
 
 describe("every route is built with the route builder", () => {
@@ -65,6 +72,8 @@ describe("generated authorization matrix: route × method × caller", () => {
         if (r.status >= 500) problems.push(`${label} ${role}: ${r.status} ${JSON.stringify(r.json).slice(0, 200)}`);
         else if (ok && [401, 403, 404].includes(r.status)) problems.push(`${label} ${role}: allowed but ${r.status} ${r.json?.error?.code ?? ""}`);
         else if (!ok && r.status !== 403) problems.push(`${label} ${role}: expected 403, got ${r.status}`);
+        // Sponsor fees: only the roles the permission table lets see them ever get a number.
+        if (r.status < 300 && !can([role], "deals.fees") && hasFee(r.json)) problems.push(`${label} ${role}: answered a sponsor fee`);
       }
     }
     expect(problems).toEqual([]);
