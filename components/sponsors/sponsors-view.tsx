@@ -14,6 +14,8 @@ import { formatMoney } from "@/lib/materials";
 interface Props {
   channelId: string;
   canManage: boolean;
+  /** The liaison, owner and presenter answer the sponsor in the review thread. */
+  canReply: boolean;
   currency: string;
   episodes: { id: string; title: string }[];
   tools: { id: string; name: string; acquisition: string }[];
@@ -86,6 +88,51 @@ export function SponsorsView(p: Props) {
         ) : null}
       </section>
 
+      {p.canManage && invoices.data?.totals.bySponsor.length ? (
+        <section aria-labelledby="tot-h" className="rounded-plank border border-timber-300 bg-white p-3 text-sm">
+          <h2 id="tot-h" className="font-bold">
+            Invoiced and paid
+          </h2>
+          <div className="grid gap-4 sm:grid-cols-2">
+            <table className="w-full" aria-label="Totals per sponsor">
+              <thead>
+                <tr className="text-left">
+                  <th>Sponsor</th>
+                  <th className="text-right">Invoiced</th>
+                  <th className="text-right">Paid</th>
+                </tr>
+              </thead>
+              <tbody>
+                {invoices.data.totals.bySponsor.map((t) => (
+                  <tr key={t.sponsorName + t.currency}>
+                    <td>{t.sponsorName}</td>
+                    <td className="num text-right">{formatMoney(t.invoicedMinor, t.currency)}</td>
+                    <td className="num text-right">{formatMoney(t.paidMinor, t.currency)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+            <table className="w-full" aria-label="Totals per month">
+              <thead>
+                <tr className="text-left">
+                  <th>Month issued</th>
+                  <th className="text-right">Invoiced</th>
+                  <th className="text-right">Paid</th>
+                </tr>
+              </thead>
+              <tbody>
+                {invoices.data.totals.byMonth.map((t) => (
+                  <tr key={t.month + t.currency}>
+                    <td className="num">{t.month}</td>
+                    <td className="num text-right">{formatMoney(t.invoicedMinor, t.currency)}</td>
+                    <td className="num text-right">{formatMoney(t.paidMinor, t.currency)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        </section>
+      ) : null}
       <section aria-labelledby="deals-h" className="space-y-2">
         <h2 id="deals-h" className="text-lg font-bold">
           Deals
@@ -174,7 +221,7 @@ export function SponsorsView(p: Props) {
   );
 }
 
-function DealItem({ deal, canManage, episodes, tools, channelId, invoices, onChanged }: Props & { deal: DealDto; invoices: InvoicesDto["invoices"]; onChanged: () => Promise<unknown> }) {
+function DealItem({ deal, canManage, canReply, episodes, tools, channelId, invoices, onChanged }: Props & { deal: DealDto; invoices: InvoicesDto["invoices"]; onChanged: () => Promise<unknown> }) {
   const write = useWrite({ scope: `sponsors:${channelId}` });
   const [kind, setKind] = useState<DeliverableKind>("spoken_disclosure");
   const [value, setValue] = useState("");
@@ -184,6 +231,30 @@ function DealItem({ deal, canManage, episodes, tools, channelId, invoices, onCha
       <p className="font-bold">
         {deal.title} · {deal.sponsorName}
       </p>
+      {canManage ? (
+        <label className="mt-1 inline-flex items-center gap-2">
+          <span className="text-walnut-700">Status</span>
+          <select
+            aria-label={`Status of ${deal.title}`}
+            className="rounded-plank border border-timber-300 bg-white px-1 py-0.5"
+            value={deal.status}
+            onChange={async (e) => {
+              try {
+                await write(`/api/deals/${deal.id}`, "PATCH", { status: e.target.value });
+              } catch (err) {
+                setError(named(err));
+              }
+              await onChanged();
+            }}
+          >
+            {DEAL_STATUSES.map((st) => (
+              <option key={st} value={st}>
+                {DEAL_STATUS_LABELS[st]}
+              </option>
+            ))}
+          </select>
+        </label>
+      ) : null}
       <p className="text-walnut-700">
         {DEAL_KIND_LABELS[deal.kind]} · {DEAL_STATUS_LABELS[deal.status]}
         {deal.feeMinor !== null && (deal.kind === "paid_integration" || deal.kind === "affiliate") ? ` · ${formatMoney(deal.feeMinor, deal.currency)}` : ""}
@@ -215,7 +286,7 @@ function DealItem({ deal, canManage, episodes, tools, channelId, invoices, onCha
           </li>
         ))}
       </ul>
-      <ReviewPanel deal={deal} canManage={canManage} channelId={channelId} />
+      <ReviewPanel deal={deal} canManage={canManage} canReply={canReply} channelId={channelId} />
       {canManage && (deal.kind === "paid_integration" || deal.kind === "affiliate") ? (
         <div className="mt-2 flex flex-wrap items-center gap-2" data-testid="deal-invoices">
           {invoices.map((i) => (
@@ -287,12 +358,13 @@ const REVIEW_STATE: Record<DealReviewDto["state"], string> = {
   reopened: "Review: reopened (the script changed after the sponsor's decision)",
 };
 
-function ReviewPanel({ deal, canManage, channelId }: { deal: DealDto; canManage: boolean; channelId: string }) {
+function ReviewPanel({ deal, canManage, canReply, channelId }: { deal: DealDto; canManage: boolean; canReply: boolean; channelId: string }) {
   const qc = useQueryClient();
   const key = ["deal-review", deal.id];
   const q = useQuery({ queryKey: key, queryFn: () => fetchJson<DealReviewDto>(`/api/deals/${deal.id}/review`) });
   const write = useWrite({ scope: `sponsors:${channelId}` });
   const [email, setEmail] = useState("");
+  const [reply, setReply] = useState("");
   const [msg, setMsg] = useState<string | null>(null);
   const r = q.data;
   if (!r) return null;
@@ -324,6 +396,21 @@ function ReviewPanel({ deal, canManage, channelId }: { deal: DealDto; canManage:
           ) : null}
         </p>
       ))}
+      {canReply && r.thread.length ? (
+        <form
+          aria-label={`Reply to ${deal.sponsorName}`}
+          className="mt-1 flex flex-wrap items-end gap-2"
+          onSubmit={async (e) => {
+            e.preventDefault();
+            await write(`/api/deals/${deal.id}/review`, "POST", { body: reply });
+            setReply("");
+            await qc.invalidateQueries({ queryKey: key });
+          }}
+        >
+          <TextField label="Reply in the thread" value={reply} onChange={(e) => setReply(e.target.value)} required />
+          <Button type="submit">Reply</Button>
+        </form>
+      ) : null}
       {canManage ? (
         <form
           aria-label={`Send a review link for ${deal.title}`}

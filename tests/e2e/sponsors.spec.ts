@@ -74,13 +74,17 @@ test("liaison sets up a deal, sees a failing check against the script, and sees 
   const gp = await guest.newPage();
   await gp.goto(href!);
   await expect(gp.getByRole("article", { name: "Sponsor review" })).toContainText("food-safe once cured");
-  await expect(gp.getByRole("article", { name: "Sponsor review" })).not.toContainText("800");
+  await expect(gp.getByRole("article", { name: "Sponsor review" })).not.toContainText("$800");
   await gp.getByRole("button", { name: "Approve" }).click();
   await expect(gp.getByTestId("review-state")).toContainText("You approved this version.");
   await shot(gp, "sponsor-review-guest");
   await guest.close();
   await page.reload();
   await expect(deal.getByTestId("deal-review")).toContainText("Review: approved by the sponsor");
+  const thread = deal.getByRole("form", { name: "Reply to Marlowe Finishes" });
+  await thread.getByLabel("Reply in the thread").fill("Thank you, Tess.");
+  await thread.getByRole("button", { name: "Reply" }).click();
+  await expect(deal.getByTestId("deal-review")).toContainText("Priya Castellan: Thank you, Tess.");
 
   // The invoice goes out through the payments service; the paid webhook comes back.
   await deal.getByRole("button", { name: "Issue invoice" }).click();
@@ -95,7 +99,8 @@ test("liaison sets up a deal, sees a failing check against the script, and sees 
   expect((await paid.json()).webhookStatus).toBe(200);
   await page.reload();
   await expect(deal.getByTestId("deal-invoices")).toContainText("Invoice $800.00: paid");
-  await expect(deal).toContainText("Paid");
+  await expect(deal.getByLabel("Status of Oil read in the spice rack")).toHaveValue("paid");
+  await expect(page.getByRole("table", { name: "Totals per sponsor" })).toContainText("Marlowe Finishes");
   await shot(page, "sponsors-deal-paid");
 
   // The editor reads the deal but not its fee.

@@ -135,8 +135,11 @@ export async function issueInvoice({ deal, sponsor }: { deal: Deal; sponsor: Spo
     await api.invoiceItems.create({ customer: customer.id, invoice: draft.id, amount: deal.feeMinor, currency: deal.currency.toLowerCase(), description: deal.title });
     const open = await api.invoices.finalizeInvoice(draft.id!);
     await api.invoices.sendInvoice(open.id!);
+    // Read it back: what the service now holds is what we record.
+    const sent = await api.invoices.retrieve(open.id!);
+    if (sent.amount_due !== deal.feeMinor) throw new AppError("unavailable:payments", `The payments service holds ${sent.amount_due} instead of ${deal.feeMinor}; the invoice is kept as a draft.`);
     return await db().transaction(async (tx) => {
-      const done = (await updateInvoiceRow(tx, row.id, { providerId: open.id!, providerCustomerId: customer.id, hostedUrl: open.hosted_invoice_url ?? null, status: "open", issuedAt: new Date() }))!;
+      const done = (await updateInvoiceRow(tx, row.id, { providerId: sent.id!, providerCustomerId: customer.id, hostedUrl: sent.hosted_invoice_url ?? null, status: sent.status === "paid" ? "paid" : "open", issuedAt: new Date() }))!;
       await updateDealRow(tx, deal.id, { status: "invoiced" });
       return done;
     });

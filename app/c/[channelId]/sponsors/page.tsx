@@ -14,7 +14,7 @@ export default async function SponsorsPage({ params }: { params: Promise<{ chann
   return (
     <div className="mx-auto max-w-6xl space-y-4">
       <h1 className="text-xl font-bold">Sponsors and deals</h1>
-      <SponsorsView channelId={access.channelId} canManage={can(access.roles, "sponsors.manage")} currency={channel!.currency} episodes={episodes.map((e) => ({ id: e.id, title: e.title }))} tools={tools.map((t) => ({ id: t.id, name: t.name, acquisition: t.acquisition }))} />
+      <SponsorsView channelId={access.channelId} canManage={can(access.roles, "sponsors.manage")} canReply={can(access.roles, "sponsors.manage") || can(access.roles, "script.write")} currency={channel!.currency} episodes={episodes.map((e) => ({ id: e.id, title: e.title }))} tools={tools.map((t) => ({ id: t.id, name: t.name, acquisition: t.acquisition }))} />
     </div>
   );
 }
