@@ -7,16 +7,9 @@
 import Timecode from "smpte-timecode";
 import { formatTimecode, parseTimecode, rateOf } from "../../lib/timecode";
 import { timeScript, type TimingSegment } from "../../lib/script-timing";
+import { bestOf } from "./timing";
 
-function best(fn: () => void, runs = 5): number {
-  let min = Infinity;
-  for (let i = 0; i < runs; i++) {
-    const t = process.hrtime.bigint();
-    fn();
-    min = Math.min(min, Number(process.hrtime.bigint() - t) / 1e6);
-  }
-  return min;
-}
+const best = bestOf;
 
 const rate = rateOf("29.97", true);
 const N = 1_000_000;

@@ -5,6 +5,7 @@
  */
 import { schedule, zonedInstant, type ScheduleDay, type ScheduleInput, type ScheduleStep } from "../../lib/shoot-schedule";
 import { exhaustive } from "../support/exhaustive-schedule";
+import { bestOf } from "./timing";
 
 function rng(seed: number) {
   let s = seed >>> 0;
@@ -34,15 +35,7 @@ function instance(steps: number, days: number, seed: number, hours = 8): Schedul
   return { steps: stepList, days: dayList, members: ["a", "b"], away: [], timeZone: tz, offCameraHours: null };
 }
 
-function time(fn: () => void, runs = 3): number {
-  let min = Infinity;
-  for (let i = 0; i < runs; i++) {
-    const t = process.hrtime.bigint();
-    fn();
-    min = Math.min(min, Number(process.hrtime.bigint() - t) / 1e6);
-  }
-  return min;
-}
+const time = (fn: () => void, runs = 3) => bestOf(fn, runs);
 
 export function scheduleBench() {
   const small = Array.from({ length: 20 }, (_, i) => instance(7, 4, 100 + i, 4));
