@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Q, type Tx } from "../client";
-import { dealEpisodes, dealTools, deals, deliverables, episodes, guestLinks, invoices, paymentEvents, reviewComments, sponsorContacts, sponsors, tools, users, type Deal } from "../schema";
+import { dealEpisodes, dealTools, deals, deliverables, episodes, guestLinks, invoices, paymentEvents, publishPackages, reviewComments, sponsorContacts, sponsors, tools, users, type Deal } from "../schema";
 
 /** Rows of sponsors, deals and deliverables. Rules live in lib/server/services/sponsors.ts. */
 
@@ -206,6 +206,12 @@ export async function listInvoicesByChannel({ channelId }: { channelId: string }
     .innerJoin(sponsors, eq(sponsors.id, deals.sponsorId))
     .where(eq(deals.channelId, channelId))
     .orderBy(asc(invoices.createdAt));
+}
+
+/** The episode's publish description (checked for the written disclosure and links). */
+export async function getPublishDescription({ episodeId }: { episodeId: string }) {
+  const [row] = await db().select({ description: publishPackages.description }).from(publishPackages).where(eq(publishPackages.episodeId, episodeId)).limit(1);
+  return row?.description ?? "";
 }
 
 export type { Deal };

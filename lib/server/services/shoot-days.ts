@@ -120,9 +120,8 @@ export async function scheduleInput(episode: Episode): Promise<{ input: Schedule
   ]);
   // This episode's days and days not tied to any episode; time other episodes already saved there is taken.
   const days = allDays.filter((d) => (d.status === "planned" || d.status === "confirmed") && (d.episodeId === episode.id || d.episodeId === null));
-  const crew = await listCrewByDays(db(), days.map((d) => d.id));
-  const helpers = await listHelpersByDays(db(), days.map((d) => d.id));
-  const taken = await listTakenOnDays(db(), days.map((d) => d.id), episode.id);
+  const dayIds = days.map((d) => d.id);
+  const [crew, helpers, taken] = await Promise.all([listCrewByDays(db(), dayIds), listHelpersByDays(db(), dayIds), listTakenOnDays(db(), dayIds, episode.id)]);
   const tz = channel.timeZone;
   const input: ScheduleInput = {
     steps: steps.map((s) => ({

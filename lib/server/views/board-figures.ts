@@ -9,7 +9,7 @@ import { getChannelById } from "../../../db/queries/channels";
 import { countShotsByEpisodes } from "../../../db/queries/shots";
 import { listReadingRatesByUserIds } from "../../../db/queries/users";
 import { episodesWithSponsorWork } from "../../../db/queries/sponsors";
-import { sponsorChecksFor } from "./sponsors";
+import { channelShelf, sponsorChecksFor } from "./sponsors";
 
 export interface BoardFigures {
   scriptSeconds: number | null;
@@ -45,9 +45,11 @@ export async function boardFigures(episodes: Episode[]): Promise<Map<string, Boa
     out.set(e.id, { scriptSeconds: Math.round(view.totals.seconds), openGaps: cov.openGaps, shotsDone: s.done, shotsTotal: s.total });
   }
   // Sponsor checks only where there is something to check: a deal, or a gifted, loaned or paid tool in the plan.
-  for (const id of await episodesWithSponsorWork({ episodeIds: ids })) {
+  const withWork = await episodesWithSponsorWork({ episodeIds: ids });
+  const shelf = withWork.length ? await channelShelf(episodes[0]!.channelId) : undefined;
+  for (const id of withWork) {
     const e = episodes.find((x) => x.id === id)!;
-    const { state } = await sponsorChecksFor(e);
+    const { state } = await sponsorChecksFor(e, shelf);
     if (state !== "none") out.set(id, { ...(out.get(id) ?? { scriptSeconds: null, openGaps: null, shotsDone: 0, shotsTotal: 0 }), sponsorState: state });
   }
   return out;

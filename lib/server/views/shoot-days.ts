@@ -7,7 +7,7 @@ import { calendarOf, type CalendarDay } from "../../calendar";
 import { appUrl } from "../infra/mail";
 import type { ShootDay } from "../../../db/schema";
 import { getChannelById } from "../../../db/queries/channels";
-import { getEpisodeById } from "../../../db/queries/episodes";
+import { getEpisodeById, listEpisodesByChannel } from "../../../db/queries/episodes";
 import { listShotsByEpisode } from "../../../db/queries/shots";
 import { listToolsByChannel } from "../../../db/queries/tools";
 import { listStepsByEpisode } from "../../../db/queries/build";
@@ -180,8 +180,8 @@ export async function channelFeed(channelId: string): Promise<string> {
   const channel = await getChannelById({ id: channelId });
   const from = new Date(Date.now() - 60 * 86_400_000).toISOString().slice(0, 10);
   const days = await shootDayDtos(await listShootDaysByChannel({ channelId, from }));
-  const titles = new Map<string, string>();
-  for (const d of days) if (d.episodeId && !titles.has(d.episodeId)) titles.set(d.episodeId, (await getEpisodeById({ id: d.episodeId }))?.title ?? "");
+  const [active, archived] = await Promise.all([listEpisodesByChannel({ channelId }), listEpisodesByChannel({ channelId, archived: true })]);
+  const titles = new Map([...active, ...archived].map((e) => [e.id, e.title]));
   return calendarOf(
     `${channel?.name ?? "Jigboard"} shoot days`,
     days.map((d) => calendarDayOf(d, `Shoot: ${(d.episodeId && titles.get(d.episodeId)) || channel?.name || "shoot day"}`, [d.location && `Location: ${d.location}`, `Crew: ${d.crew.map((c) => c.name).join(", ") || "not set"}`, d.notes].filter(Boolean).join("\n"))),

@@ -1,6 +1,5 @@
 import "server-only";
 /** Sponsors, deals and the episode's sponsor checks as the API shows them. */
-import { eq } from "drizzle-orm";
 import crypto from "node:crypto";
 import { DELIVERABLE_LABELS, mentionSegments, runChecks, type CheckInput, type DeliverableKind } from "../../sponsor-checks";
 import { allowsDropFrame } from "../../frame-rate";
@@ -8,8 +7,8 @@ import { formatTimecode, rateOf } from "../../timecode";
 import type { DealDto, DealReviewDto, GuestReviewDto, REVIEW_STATES, SponsorChecksDto, SponsorDto } from "../../schemas/sponsors";
 import { scriptViewFor } from "./script";
 import { db } from "../../../db/client";
-import { publishPackages, type Deal, type Episode, type GuestLink, type Sponsor } from "../../../db/schema";
-import { dealLinks, listContactsBySponsors, listDealsByEpisode, listGuestLinks, listReviewComments, listSponsorsByChannel } from "../../../db/queries/sponsors";
+import type { Deal, Episode, GuestLink, Sponsor } from "../../../db/schema";
+import { dealLinks, getPublishDescription, listContactsBySponsors, listDealsByEpisode, listGuestLinks, listReviewComments, listSponsorsByChannel } from "../../../db/queries/sponsors";
 import { getEpisodeById } from "../../../db/queries/episodes";
 import { presignGet } from "../../../storage/presign";
 import { listStepsByEpisode } from "../../../db/queries/build";
@@ -56,17 +55,22 @@ export async function dealDtos(rows: Deal[], canSeeFees: boolean): Promise<DealD
   }));
 }
 
-/** Everything the checks read for one episode, fresh. */
-export async function checkInputFor(episode: Episode): Promise<{ input: CheckInput; sponsorNames: Map<string, string> }> {
-  const [view, steps, tools, sponsors, ranges, clips, shots, pkg, deals] = await Promise.all([
+/** The channel's tools and sponsors: read once when many episodes are checked (the board). */
+export async function channelShelf(channelId: string) {
+  const [tools, sponsors] = await Promise.all([listToolsByChannel({ channelId }), listSponsorsByChannel({ channelId, archived: true })]);
+  return { tools, sponsors };
+}
+
+/** Everything the checks read for one episode, fresh; the script view comes back too for callers that need its versions. */
+export async function checkInputFor(episode: Episode, shelf?: Awaited<ReturnType<typeof channelShelf>>): Promise<{ input: CheckInput; view: Awaited<ReturnType<typeof scriptViewFor>> }> {
+  const [view, steps, { tools, sponsors }, ranges, clips, shots, description, deals] = await Promise.all([
     scriptViewFor(episode),
     listStepsByEpisode({ episodeId: episode.id }),
-    listToolsByChannel({ channelId: episode.channelId }),
-    listSponsorsByChannel({ channelId: episode.channelId, archived: true }),
+    shelf ?? channelShelf(episode.channelId),
     listRangesByEpisode({ episodeId: episode.id }),
     listClipsByEpisode({ episodeId: episode.id }),
     listShotsByEpisode({ episodeId: episode.id }),
-    db().select({ description: publishPackages.description }).from(publishPackages).where(eq(publishPackages.episodeId, episode.id)).limit(1),
+    getPublishDescription({ episodeId: episode.id }),
     listDealsByEpisode({ episodeId: episode.id }),
   ]);
   const links = await dealLinks(db(), deals.map((d) => d.id));
@@ -78,15 +82,15 @@ export async function checkInputFor(episode: Episode): Promise<{ input: CheckInp
     steps: steps.map((s) => ({ id: s.id, title: s.title, toolIds: s.toolIds })),
     tools: tools.map((t) => ({ id: t.id, name: t.name, acquisition: t.acquisition, sponsorId: t.sponsorId, sponsorName: t.sponsorId ? (sponsorName.get(t.sponsorId) ?? null) : null })),
     broll: ranges.map((r) => ({ start: r.startFrame, end: r.endFrame, stepId: r.clipId ? (stepOfClip.get(r.clipId) ?? null) : null })),
-    description: pkg[0]?.description ?? "",
+    description,
     deals: deals.map((d) => ({ id: d.id, sponsorId: d.sponsorId, sponsorName: sponsorName.get(d.sponsorId) ?? "", kind: d.kind, toolIds: links.tools.filter((t) => t.dealId === d.id).map((t) => t.toolId) })),
     deliverables: links.deliverables.map((x) => ({ id: x.id, dealId: x.dealId, kind: x.kind, seconds: x.seconds, phrases: x.phrases, url: x.url })),
   };
-  return { input, sponsorNames: sponsorName };
+  return { input, view };
 }
 
-export async function sponsorChecksFor(episode: Episode): Promise<SponsorChecksDto> {
-  const { input } = await checkInputFor(episode);
+export async function sponsorChecksFor(episode: Episode, shelf?: Awaited<ReturnType<typeof channelShelf>>): Promise<SponsorChecksDto> {
+  const { input } = await checkInputFor(episode, shelf);
   const report = runChecks(input);
   const dealSponsor = new Map(input.deals.map((d) => [d.id, d.sponsorName]));
   return {
@@ -108,11 +112,10 @@ export async function dealScript(deal: Deal) {
   for (const id of episodeIds) {
     const episode = await getEpisodeById({ id });
     if (!episode) continue;
-    const { input } = await checkInputFor(episode);
+    const { input, view } = await checkInputFor(episode);
     const d = input.deals.find((x) => x.id === deal.id);
     if (!d) continue;
     const mentions = mentionSegments(d, input.segments, input.tools);
-    const view = await scriptViewFor(episode);
     out.push({ episode, input, mentions, versions: mentions.map((m) => `${m.id}:${view.segments.find((s) => s.id === m.id)?.version ?? 0}`) });
   }
   const fingerprint = crypto.createHash("sha256").update(out.flatMap((o) => o.versions).sort().join(",")).digest("hex");
