@@ -14,6 +14,7 @@ export function EpisodeNav({ base }: { base: string }) {
     { href: `${base}/footage`, label: "Footage" },
     { href: `${base}/coverage`, label: "B-roll coverage" },
     { href: `${base}/sponsors`, label: "Sponsor checks" },
+    { href: `${base}/publish`, label: "Publish" },
   ];
   return (
     <nav aria-label="Episode" className="flex flex-wrap gap-1 border-b border-timber-300">

@@ -653,7 +653,8 @@ export const invoices = pgTable(
     paidAt: timestamp("paid_at", { withTimezone: true }),
     createdAt: createdAt(),
   },
-  (t) => [index("invoices_deal_idx").on(t.dealId), uniqueIndex("invoices_provider_key").on(t.providerId)],
+  // Not unique: an imported copy of a channel keeps its invoices, so one provider invoice may be recorded twice.
+  (t) => [index("invoices_deal_idx").on(t.dealId), index("invoices_provider_idx").on(t.providerId)],
 );
 
 /** Payment-service events already handled: the same event twice changes nothing. */
@@ -670,13 +671,40 @@ export const publishPackages = pgTable(
   {
     id: id(),
     episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
-    description: text("description").notNull().default(""),
-    disclosures: text("disclosures").notNull().default(""),
-    credits: text("credits").notNull().default(""),
-    checklist: jsonb("checklist").$type<Record<string, boolean>>().notNull().default({}),
+    /** The video's title as published. */
+    title: text("title").notNull().default(""),
+    /** The opening paragraph of the description, written by the team. */
+    summary: text("summary").notNull().default(""),
+    /** Free text at the end of the description (links, thanks). */
+    closing: text("closing").notNull().default(""),
+    /** Which generated sections the description carries. */
+    sections: jsonb("sections").$type<{ chapters: boolean; credits: boolean; materials: boolean; safety: boolean }>().notNull().default({ chapters: true, credits: true, materials: true, safety: true }),
+    thumbnailKey: text("thumbnail_key"),
+    thumbnailContentType: text("thumbnail_content_type"),
+    /** The team confirms the thumbnail image itself carries the "Ad" label (an image cannot be read here). */
+    thumbnailAdLabel: boolean("thumbnail_ad_label").notNull().default(false),
+    /** The script as marked final: segment ids and versions, hashed. Any later edit makes it not final. */
+    scriptFinalFingerprint: text("script_final_fingerprint"),
+    scriptFinalAt: timestamp("script_final_at", { withTimezone: true }),
+    scriptFinalBy: uuid("script_final_by").references(() => users.id, { onDelete: "set null" }),
+    updatedBy: uuid("updated_by").references(() => users.id, { onDelete: "set null" }),
     updatedAt: updatedAt(),
   },
   (t) => [uniqueIndex("publish_packages_episode_key").on(t.episodeId)],
+);
+
+/** An owner moved an episode to published while its checklist failed: who, why, and what was failing. */
+export const publishOverrides = pgTable(
+  "publish_overrides",
+  {
+    id: id(),
+    episodeId: uuid("episode_id").notNull().references(() => episodes.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "set null" }),
+    reason: text("reason").notNull(),
+    failing: jsonb("failing").$type<string[]>().notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("publish_overrides_episode_idx").on(t.episodeId, t.createdAt)],
 );
 
 /* ───────────── mail and audit ───────────── */
@@ -714,7 +742,7 @@ export const pendingUploads = pgTable(
     channelId: uuid("channel_id")
       .notNull()
       .references(() => channels.id, { onDelete: "cascade" }),
-    purpose: text("purpose").$type<"tool_photo" | "failure_photo">().notNull(),
+    purpose: text("purpose").$type<"tool_photo" | "failure_photo" | "thumbnail">().notNull(),
     contentType: text("content_type").notNull(),
     sizeBytes: bigint("size_bytes", { mode: "number" }).notNull(),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
@@ -764,3 +792,4 @@ export type Sponsor = typeof sponsors.$inferSelect;
 export type Deal = typeof deals.$inferSelect;
 export type Deliverable = typeof deliverables.$inferSelect;
 export type GuestLink = typeof guestLinks.$inferSelect;
+export type PublishPackage = typeof publishPackages.$inferSelect;

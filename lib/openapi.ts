@@ -8,6 +8,7 @@ import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
 import { channelSchema, channelSettingsSchema, channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, invitationSchema, mailSchema, memberRolesSchema, memberSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
+import { overviewSchema, publishSchema, publishUpdateSchema, scriptFinalSchema, thumbnailSetSchema, thumbnailUploadSchema } from "./schemas/publish";
 import { invoiceSchema, invoicesSchema, dealReviewSchema, guestReviewSchema, reviewDecisionSchema, reviewLinkCreateSchema, reviewReplySchema, dealCreateSchema, dealSchema, dealUpdateSchema, deliverableCreateSchema, deliverableSchema, sponsorChecksSchema, sponsorCreateSchema, sponsorSchema, sponsorUpdateSchema } from "./schemas/sponsors";
 import { callSheetSchema, callSheetSendSchema, daysAwayListSchema, daysAwaySchema, scheduleSchema, shootDayCreateSchema, shootDayListQuerySchema, shootDaySchema, shootDayUpdateSchema } from "./schemas/shoot";
 import { cutListSchema, materialCreateSchema, materialSchema, materialUpdateSchema, photoUploadSchema, planSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolSchema, toolUpdateSchema } from "./schemas/build";
@@ -39,7 +40,7 @@ export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/channels/{channelId}/episodes", summary: "Episodes on the board (filters: stage, publish month, archived)", query: episodeListQuerySchema, response: z.object({ episodes: z.array(episodeSchema) }), errors: [400, 401, 404] },
   { method: "post", path: "/api/channels/{channelId}/episodes", summary: "Create an episode at the end of its stage", body: episodeCreateSchema, response: z.object({ episode: episodeSchema }), status: 201, errors: [400, 401, 403, 404] },
   { method: "get", path: "/api/episodes/{episodeId}", summary: "One episode", response: z.object({ episode: episodeSchema }), errors: [401, 404] },
-  { method: "patch", path: "/api/episodes/{episodeId}", summary: "Edit fields and/or move (stage, position) in one transaction", body: episodeUpdateSchema, response: z.object({ episode: episodeSchema }), errors: [400, 401, 403, 404, 409, 422] },
+  { method: "patch", path: "/api/episodes/{episodeId}", summary: "Edit fields and/or move (stage, position) in one transaction; a move to published is refused (409, error.current.checklist) while the publish checklist fails, unless an owner sends publishOverride", body: episodeUpdateSchema, response: z.object({ episode: episodeSchema }), errors: [400, 401, 403, 404, 409, 422] },
   { method: "delete", path: "/api/episodes/{episodeId}", summary: "Archive an episode", response: z.object({ episode: episodeSchema }), errors: [401, 403, 404, 409] },
   { method: "post", path: "/api/episodes/{episodeId}/restore", summary: "Bring an archived episode back to the board", response: z.object({ episode: episodeSchema }), errors: [401, 403, 404, 409] },
   { method: "get", path: "/api/channels/{channelId}/members", summary: "Members and their roles", response: z.object({ members: z.array(memberSchema) }), errors: [401, 404] },
@@ -142,6 +143,13 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/deals/{dealId}/invoice", summary: "Issue the deal's invoice through the payments service (liaison, owner)", response: z.object({ invoice: invoiceSchema }), status: 201, errors: [401, 403, 404, 422, 502] },
   { method: "get", path: "/api/channels/{channelId}/invoices", summary: "Invoices with totals per sponsor and per month (liaison, owner)", response: invoicesSchema, errors: [401, 403, 404] },
   { method: "post", path: "/api/payments/webhook", summary: "Payments service webhook: signature verified on the raw body; idempotent", auth: false, response: z.object({ received: z.boolean(), outcome: z.string() }), errors: [400] },
+  { method: "get", path: "/api/episodes/{episodeId}/publish", summary: "The publish package: composed description, limits, chapters and the publish checklist", response: publishSchema, errors: [401, 404] },
+  { method: "patch", path: "/api/episodes/{episodeId}/publish", summary: "Edit the title, summary, closing text, sections and the thumbnail's Ad label", body: publishUpdateSchema, response: publishSchema, errors: [400, 401, 403, 404] },
+  { method: "post", path: "/api/episodes/{episodeId}/publish/thumbnail-upload", summary: "Sign a direct upload of the thumbnail (JPEG or PNG, at most 2 MB)", body: thumbnailUploadSchema, response: z.object({ key: z.string(), uploadUrl: z.string(), headers: z.record(z.string(), z.string()) }), status: 201, errors: [400, 401, 403, 404] },
+  { method: "put", path: "/api/episodes/{episodeId}/publish/thumbnail", summary: "Set the thumbnail to an uploaded image", body: thumbnailSetSchema, response: publishSchema, errors: [400, 401, 403, 404, 422] },
+  { method: "delete", path: "/api/episodes/{episodeId}/publish/thumbnail", summary: "Remove the thumbnail", response: publishSchema, errors: [401, 403, 404] },
+  { method: "put", path: "/api/episodes/{episodeId}/publish/script-final", summary: "Mark the script final as it stands, or take the mark away", body: scriptFinalSchema, response: publishSchema, errors: [400, 401, 403, 404, 422] },
+  { method: "get", path: "/api/channels/{channelId}/overview", summary: "The channel at a glance: pipeline by stage, shoot days and sponsor dates ahead, publish dates, open gaps, runtime against target", response: overviewSchema, errors: [401, 404] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];

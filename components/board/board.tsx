@@ -70,6 +70,8 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
   // The new episode is also shown to sighted users, not only announced.
   const [added, setAdded] = useState<{ id: string; title: string; stage: Stage } | null>(null);
   const [error, setError] = useState<string | null>(null);
+  /** When a move to published was refused by the checklist: where to see and fix it. */
+  const [checklistFor, setChecklistFor] = useState<string | null>(null);
   const [stageFilter, setStageFilter] = useState<Stage | "all">("all");
   const [month, setMonth] = useState("");
   const [creating, setCreating] = useState(false);
@@ -95,6 +97,7 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
       if (ctx?.previous) qc.setQueryData(key, ctx.previous);
       const why = err instanceof ApiError ? err.message : "The server could not be reached.";
       setError(`“${title(v.id)}” was not moved: ${why} It is back where it was.`);
+      setChecklistFor(err instanceof ApiError && err.status === 409 && v.stage === "published" ? v.id : null);
       setStatus(`Move refused. “${title(v.id)}” is back in its place.`);
     },
     onSuccess: (ep) => {
@@ -234,6 +237,11 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
       {error ? (
         <div data-testid="board-error">
           <Notice tone="error">{error}</Notice>
+          {checklistFor ? (
+            <Link className="mt-1 inline-block text-sm font-medium underline" href={`/c/${channelId}/episodes/${checklistFor}/publish`}>
+              Open the publish checklist
+            </Link>
+          ) : null}
         </div>
       ) : null}
 

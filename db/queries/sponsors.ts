@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, gt, inArray, isNull, sql } from "drizzle-orm";
 import { db, type Q, type Tx } from "../client";
-import { dealEpisodes, dealTools, deals, deliverables, episodes, guestLinks, invoices, paymentEvents, publishPackages, reviewComments, sponsorContacts, sponsors, tools, users, type Deal } from "../schema";
+import { dealEpisodes, dealTools, deals, deliverables, episodes, guestLinks, invoices, paymentEvents, reviewComments, sponsorContacts, sponsors, tools, users, type Deal } from "../schema";
 
 /** Rows of sponsors, deals and deliverables. Rules live in lib/server/services/sponsors.ts. */
 
@@ -187,10 +187,11 @@ export async function updateInvoiceRow(tx: Q, id: string, set: Partial<typeof in
   return row ?? null;
 }
 
-export async function getInvoiceByProviderId(q: Q, providerId: string) {
-  const [row] = await q.select().from(invoices).where(eq(invoices.providerId, providerId)).limit(1);
-  return row ?? null;
+/** Every invoice recorded for one provider invoice (a channel and its imported copy share it). */
+export async function listInvoicesByProviderId(q: Q, providerId: string) {
+  return q.select().from(invoices).where(eq(invoices.providerId, providerId));
 }
+
 
 /** Records an event id once; false when it was seen before (the same event twice changes nothing). */
 export async function recordPaymentEvent(tx: Tx, id: string, type: string) {
@@ -206,12 +207,6 @@ export async function listInvoicesByChannel({ channelId }: { channelId: string }
     .innerJoin(sponsors, eq(sponsors.id, deals.sponsorId))
     .where(eq(deals.channelId, channelId))
     .orderBy(asc(invoices.createdAt));
-}
-
-/** The episode's publish description (checked for the written disclosure and links). */
-export async function getPublishDescription({ episodeId }: { episodeId: string }) {
-  const [row] = await db().select({ description: publishPackages.description }).from(publishPackages).where(eq(publishPackages.episodeId, episodeId)).limit(1);
-  return row?.description ?? "";
 }
 
 export type { Deal };

@@ -59,10 +59,13 @@ export const episodeUpdateSchema = z
     stage: stageSchema,
     position: z.number().int("must be a whole number").min(0, "must be 0 or more").max(100000),
     presenterId: z.uuid({ message: "must be a member's id" }).nullable(),
+    /** Why an owner publishes while the checklist fails; recorded with what was failing. */
+    publishOverride: z.string().trim().min(10, "say why, in at least 10 characters").max(1000, "at most 1,000 characters"),
   })
   .partial()
   .strict()
   .refine((v) => Object.keys(v).length > 0, { message: "send at least one field to change" })
+  .refine((v) => v.publishOverride === undefined || v.stage === "published", { message: "an override goes with a move to published", path: ["publishOverride"] })
   .superRefine(dropFrameRule)
   .meta({ id: "EpisodeUpdate" });
 export type EpisodeUpdate = z.output<typeof episodeUpdateSchema>;

@@ -14,9 +14,10 @@ export const SHOT_KIND_LABELS: Record<ShotKind, string> = {
   slow_motion: "Slow motion",
   pickup: "Pickup",
 };
-export const SHOT_STATUSES = ["planned", "captured", "selected", "rejected"] as const;
+/** "waived": the team decided the shot is not needed; the publish checklist counts it as done. */
+export const SHOT_STATUSES = ["planned", "captured", "selected", "rejected", "waived"] as const;
 export type ShotStatus = (typeof SHOT_STATUSES)[number];
-export const SHOT_STATUS_LABELS: Record<ShotStatus, string> = { planned: "Planned", captured: "Captured", selected: "Selected", rejected: "Rejected" };
+export const SHOT_STATUS_LABELS: Record<ShotStatus, string> = { planned: "Planned", captured: "Captured", selected: "Selected", rejected: "Rejected", waived: "Not needed" };
 
 /** Footage, sound and stills the store accepts; anything else is refused before a byte moves. */
 export const MEDIA_TYPES = [

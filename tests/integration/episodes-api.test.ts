@@ -69,7 +69,9 @@ describe("role matrix", () => {
   });
 
   const moves: [Role, Stage, Stage, number][] = [
-    ["owner", "idea", "published", 200],
+    ["owner", "idea", "scheduled", 200],
+    // A blank episode fails the publish checklist (tests/integration/publish.test.ts covers the gate).
+    ["owner", "idea", "published", 409],
     ["presenter", "planning", "shooting", 200],
     ["producer", "shooting", "editing", 200],
     ["editor", "editing", "review", 200],

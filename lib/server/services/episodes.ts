@@ -13,6 +13,8 @@ import { AppError } from "../http/errors";
 import { db } from "../../../db/client";
 import { lockEpisode } from "../../../db/queries/episode-lock";
 import { getMembership } from "../../../db/queries/channels";
+import { insertPublishOverride } from "../../../db/queries/publish";
+import { publishViewFor } from "../views/publish";
 import {
   archiveEpisodeRow,
   columnIds,
@@ -41,7 +43,10 @@ export async function createEpisode({ channelId, userId, input }: { channelId: s
  * (clamped), renumbering both columns densely.
  */
 export async function updateEpisode({ id, channelId, userId, access, patch }: { id: string; channelId: string; userId: string; access: ChannelAccess; patch: EpisodeUpdate }) {
-  const { stage, position, ...fields } = patch;
+  const { stage, position, publishOverride, ...fields } = patch;
+  // The publish checklist is read before the move; it reads many tables and takes no lock.
+  const before = stage === "published" ? await getEpisodeInChannel(db(), id, channelId) : null;
+  const gate = before && before.stage !== "published" ? (await publishViewFor(before)).checklist : null;
   const moving = stage !== undefined || position !== undefined;
   if (Object.keys(fields).length > 0) assertCan(access, "episode.edit");
   if (patch.presenterId && !(await getMembership({ userId: patch.presenterId, channelId }))) {
@@ -54,6 +59,13 @@ export async function updateEpisode({ id, channelId, userId, access, patch }: { 
     if (moving) {
       assertCanMove(access, current.stage, stage ?? current.stage);
       if (current.archivedAt) throw new AppError("conflict:episode.archived", "This episode is archived; restore it before moving it.");
+      if (gate && !gate.pass && current.stage !== "published" && stage === "published") {
+        const failing = gate.items.filter((i) => !i.pass);
+        const list = failing.map((i) => `${i.label.toLowerCase()} (${i.detail})`).join("; ");
+        if (!publishOverride) throw new AppError("conflict:publish.checklist", `The publish checklist fails: ${list}.`, { current: { checklist: gate } });
+        if (!access.roles.includes("owner")) throw new AppError("forbidden:publish.override", "Only an owner can publish while the checklist fails.");
+        await insertPublishOverride(tx, { episodeId: id, userId, reason: publishOverride, failing: failing.map((i) => i.key) });
+      }
     }
     const rate = patch.frameRate ?? current.frameRate;
     if ((patch.dropFrame ?? current.dropFrame) && !allowsDropFrame(rate)) {

@@ -4,7 +4,7 @@ import type { DealCreate, DealUpdate, DeliverableCreate, SponsorCreate } from ".
 import { AppError } from "../http/errors";
 import { db, type Tx } from "../../../db/client";
 import type { Deal, GuestLink, Sponsor } from "../../../db/schema";
-import { channelOwns, deleteDeliverableRow, getInvoiceByProviderId, insertDeal, insertInvoice, recordPaymentEvent, updateInvoiceRow, insertDeliverable, insertGuestLink, insertReviewComment, insertSponsor, replaceContacts, replaceDealEpisodes, replaceDealTools, revokeGuestLinkRow, updateDealRow, updateSponsorRow } from "../../../db/queries/sponsors";
+import { channelOwns, deleteDeliverableRow, listInvoicesByProviderId, insertDeal, insertInvoice, recordPaymentEvent, updateInvoiceRow, insertDeliverable, insertGuestLink, insertReviewComment, insertSponsor, replaceContacts, replaceDealEpisodes, replaceDealTools, revokeGuestLinkRow, updateDealRow, updateSponsorRow } from "../../../db/queries/sponsors";
 import { newToken } from "../infra/tokens";
 import { appUrl, sendMail } from "../infra/mail";
 import { dealScript } from "../views/sponsors";
@@ -154,10 +154,12 @@ export async function handlePaymentEvent(event: { id: string; type: string; data
   return db().transaction(async (tx) => {
     if (!(await recordPaymentEvent(tx, event.id, event.type))) return "duplicate" as const;
     if (event.type !== "invoice.paid" || !event.data.object.id) return "ignored" as const;
-    const inv = await getInvoiceByProviderId(tx, event.data.object.id);
-    if (!inv) return "unknown" as const;
-    await updateInvoiceRow(tx, inv.id, { status: "paid", paidAt: new Date() });
-    await updateDealRow(tx, inv.dealId, { status: "paid" });
+    const found = await listInvoicesByProviderId(tx, event.data.object.id);
+    if (found.length === 0) return "unknown" as const;
+    for (const inv of found) {
+      await updateInvoiceRow(tx, inv.id, { status: "paid", paidAt: new Date() });
+      await updateDealRow(tx, inv.dealId, { status: "paid" });
+    }
     return "paid" as const;
   });
 }

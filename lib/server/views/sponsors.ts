@@ -8,7 +8,7 @@ import type { DealDto, DealReviewDto, GuestReviewDto, REVIEW_STATES, SponsorChec
 import { scriptViewFor } from "./script";
 import { db } from "../../../db/client";
 import type { Deal, Episode, GuestLink, Sponsor } from "../../../db/schema";
-import { dealLinks, getPublishDescription, listContactsBySponsors, listDealsByEpisode, listGuestLinks, listReviewComments, listSponsorsByChannel } from "../../../db/queries/sponsors";
+import { dealLinks, listContactsBySponsors, listDealsByEpisode, listGuestLinks, listReviewComments, listSponsorsByChannel } from "../../../db/queries/sponsors";
 import { getEpisodeById } from "../../../db/queries/episodes";
 import { presignGet } from "../../../storage/presign";
 import { listStepsByEpisode } from "../../../db/queries/build";
@@ -16,6 +16,13 @@ import { listToolsByChannel } from "../../../db/queries/tools";
 import { listRangesByEpisode } from "../../../db/queries/coverage";
 import { listClipsByEpisode } from "../../../db/queries/footage";
 import { listShotsByEpisode } from "../../../db/queries/shots";
+import { getPublishPackage } from "../../../db/queries/publish";
+import { listMaterialsByEpisode } from "../../../db/queries/materials";
+import { composeDescription, disclosureLines, materialLines, safetyLine, type DescriptionParts } from "../../publish";
+import { CAUTIONS, DEFER, stepHazards } from "../../safety";
+import { totalsByMaterial } from "../../materials";
+import { toMaterialInput } from "./materials";
+import type { PublishPackage } from "../../../db/schema";
 
 export async function sponsorDtos(rows: Sponsor[]): Promise<SponsorDto[]> {
   const contacts = await listContactsBySponsors(db(), rows.map((r) => r.id));
@@ -61,17 +68,41 @@ export async function channelShelf(channelId: string) {
   return { tools, sponsors };
 }
 
-/** Everything the checks read for one episode, fresh; the script view comes back too for callers that need its versions. */
-export async function checkInputFor(episode: Episode, shelf?: Awaited<ReturnType<typeof channelShelf>>): Promise<{ input: CheckInput; view: Awaited<ReturnType<typeof scriptViewFor>> }> {
-  const [view, steps, { tools, sponsors }, ranges, clips, shots, description, deals] = await Promise.all([
+/** The package's own fields, or what a new package starts with. */
+export function packageOrDefault(pkg: PublishPackage | null, episode: Episode) {
+  return {
+    title: pkg?.title ?? "",
+    summary: pkg?.summary ?? episode.summary,
+    closing: pkg?.closing ?? "",
+    sections: pkg?.sections ?? { chapters: true, credits: true, materials: true, safety: true },
+    thumbnailKey: pkg?.thumbnailKey ?? null,
+    thumbnailAdLabel: pkg?.thumbnailAdLabel ?? false,
+    scriptFinalFingerprint: pkg?.scriptFinalFingerprint ?? null,
+    scriptFinalAt: pkg?.scriptFinalAt ?? null,
+  };
+}
+
+/** Segment ids and versions, hashed: what "the script as marked final" means. */
+export function scriptFingerprint(segments: { id: string; version: number }[]): string {
+  return crypto.createHash("sha256").update(segments.map((s) => `${s.id}:${s.version}`).join(",")).digest("hex");
+}
+
+/**
+ * Everything the checks read for one episode, fresh; the script view comes
+ * back too for callers that need its versions. The description the checks
+ * read is the one the publish package composes from the data.
+ */
+export async function checkInputFor(episode: Episode, shelf?: Awaited<ReturnType<typeof channelShelf>>) {
+  const [view, steps, { tools, sponsors }, ranges, clips, shots, pkgRow, deals, materials] = await Promise.all([
     scriptViewFor(episode),
     listStepsByEpisode({ episodeId: episode.id }),
     shelf ?? channelShelf(episode.channelId),
     listRangesByEpisode({ episodeId: episode.id }),
     listClipsByEpisode({ episodeId: episode.id }),
     listShotsByEpisode({ episodeId: episode.id }),
-    getPublishDescription({ episodeId: episode.id }),
+    getPublishPackage({ episodeId: episode.id }),
     listDealsByEpisode({ episodeId: episode.id }),
+    listMaterialsByEpisode({ episodeId: episode.id }),
   ]);
   const links = await dealLinks(db(), deals.map((d) => d.id));
   const sponsorName = new Map(sponsors.map((s) => [s.id, s.name]));
@@ -82,11 +113,40 @@ export async function checkInputFor(episode: Episode, shelf?: Awaited<ReturnType
     steps: steps.map((s) => ({ id: s.id, title: s.title, toolIds: s.toolIds })),
     tools: tools.map((t) => ({ id: t.id, name: t.name, acquisition: t.acquisition, sponsorId: t.sponsorId, sponsorName: t.sponsorId ? (sponsorName.get(t.sponsorId) ?? null) : null })),
     broll: ranges.map((r) => ({ start: r.startFrame, end: r.endFrame, stepId: r.clipId ? (stepOfClip.get(r.clipId) ?? null) : null })),
-    description,
+    description: "",
     deals: deals.map((d) => ({ id: d.id, sponsorId: d.sponsorId, sponsorName: sponsorName.get(d.sponsorId) ?? "", kind: d.kind, toolIds: links.tools.filter((t) => t.dealId === d.id).map((t) => t.toolId) })),
     deliverables: links.deliverables.map((x) => ({ id: x.id, dealId: x.dealId, kind: x.kind, seconds: x.seconds, phrases: x.phrases, url: x.url })),
   };
-  return { input, view };
+  const pkg = packageOrDefault(pkgRow, episode);
+  // Credits come from a first pass of the checks; the description does not change them.
+  const credits = runChecks(input).credits;
+  const toolName = new Map(tools.map((t) => [t.id, t.name]));
+  const usedToolIds = [...new Set(steps.flatMap((s) => s.toolIds))];
+  const kindOf = new Map(tools.map((t) => [t.id, t.kind]));
+  const hazards = [...new Set(steps.flatMap((s) => stepHazards(s.hazards, s.toolIds.map((id) => kindOf.get(id) ?? "other"))))];
+  const parts: DescriptionParts = {
+    disclosures: disclosureLines(
+      input.deals.map((d) => ({
+        kind: d.kind,
+        sponsorName: d.sponsorName,
+        toolNames: d.toolIds.map((id) => toolName.get(id) ?? "").filter(Boolean),
+        urls: input.deliverables.filter((x) => x.dealId === d.id && x.kind === "description_link" && x.url).map((x) => x.url!),
+      })),
+    ),
+    summary: pkg.summary,
+    chapters: view.chapters.text,
+    credits: usedToolIds.flatMap((id) => {
+      const credit = credits.find((c) => c.toolId === id);
+      const name = toolName.get(id);
+      return credit ? [credit.descriptionLine] : name ? [name] : [];
+    }),
+    materials: materialLines(totalsByMaterial(materials.map(toMaterialInput)).byMaterial),
+    safety: safetyLine(hazards.map((h) => CAUTIONS[h].title), DEFER),
+    closing: pkg.closing,
+    sections: pkg.sections,
+  };
+  input.description = composeDescription(parts);
+  return { input, view, parts, pkg, shots, deals };
 }
 
 export async function sponsorChecksFor(episode: Episode, shelf?: Awaited<ReturnType<typeof channelShelf>>): Promise<SponsorChecksDto> {
