@@ -28,6 +28,9 @@ export function AppHeader({
           <Link className={link} href={`/c/${channelId}`}>
             Episodes
           </Link>
+          <Link className={link} href={`/c/${channelId}/overview`}>
+            At a glance
+          </Link>
           <Link className={link} href={`/c/${channelId}/shoot-days`}>
             Shoot days
           </Link>

@@ -92,6 +92,7 @@ export async function seedDemo(db: NodePgDatabase<typeof schema>, opts: SeedOpti
     await seedShotsAndFootage(tx, channel.id, episodeIds, stepIds, ids["editor@jigboard.example"]!, opts);
     await seedShootDays(tx, channel.id, episodeIds, stepIds, ids);
     await seedDeals(tx, channel.id, episodeIds);
+    await seedPublish(tx, episodeIds);
     await tx.insert(schema.episodes).values({
       channelId: outsiderChannel.id,
       title: "Hall bench in steamed beech",
@@ -452,4 +453,14 @@ async function seedDeals(tx: SeedTx, channelId: string, episodeIds: Record<strin
     { kind: "description_link", url: "https://kestrel-abrasives.example/walnut" },
   ]);
   await deal({ sponsorId: harrow!.id, title: "Gifted sander", kind: "gifted_tool", status: "signed" }, [table], [sander!.id], [{ kind: "spoken_disclosure" }]);
+}
+
+/** An invented publish package in progress: title and texts written, no thumbnail yet, the script not marked final, no "Ad" label yet for the paid read. */
+async function seedPublish(tx: SeedTx, episodeIds: Record<string, string>) {
+  await tx.insert(schema.publishPackages).values({
+    episodeId: episodeIds["Walnut side table with a floating top"]!,
+    title: "Walnut side table with a floating top (bridle joints, hardwax oil)",
+    summary: "One 8/4 walnut board becomes a side table: bridle joints cut on the table saw, a top that floats on cleats with a shadow gap, and three coats of hardwax oil.",
+    closing: "Plans and a printable cut list: https://crooked-kerf.example/side-table\nQuestions go in the comments; we read them all.",
+  });
 }

@@ -130,12 +130,14 @@ export interface ChecklistItem {
   pass: boolean;
   detail: string;
   tab: string;
+  /** An action the publish page offers right on the item. */
+  action: "mark_final" | null;
 }
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 export function publishChecklist(i: ChecklistInput): { items: ChecklistItem[]; pass: boolean; failing: ChecklistKey[] } {
-  const item = (key: ChecklistKey, label: string, pass: boolean, detail: string): ChecklistItem => ({ key, label, pass, detail, tab: CHECKLIST_FIX[key] });
+  const item = (key: ChecklistKey, label: string, pass: boolean, detail: string): ChecklistItem => ({ key, label, pass, detail, tab: CHECKLIST_FIX[key], action: key === "script_final" && !pass && i.script.segments > 0 ? "mark_final" : null });
   const failingChecks = i.sponsorChecks.filter((c) => !c.pass);
   const unapproved = i.approvals.filter((a) => a.state !== "approved");
   const descProblems = [...i.texts.problems.filter((p) => p.field === "description").map((p) => p.message), ...(i.chaptersValid ? [] : i.chapterProblems.length ? i.chapterProblems : ["the chapters are not valid"])];

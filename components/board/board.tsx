@@ -61,7 +61,7 @@ function Column({
   );
 }
 
-export function Board({ channelId, roles, initial }: { channelId: string; roles: Role[]; initial: EpisodeDto[] }) {
+export function Board({ channelId, roles, initial, initialStage = "all" }: { channelId: string; roles: Role[]; initial: EpisodeDto[]; initialStage?: Stage | "all" }) {
   const qc = useQueryClient();
   const key = useMemo(() => ["episodes", channelId], [channelId]);
   const { data: episodes = initial } = useQuery({ queryKey: key, queryFn: () => episodesApi.list(channelId), initialData: initial });
@@ -72,7 +72,7 @@ export function Board({ channelId, roles, initial }: { channelId: string; roles:
   const [error, setError] = useState<string | null>(null);
   /** When a move to published was refused by the checklist: where to see and fix it. */
   const [checklistFor, setChecklistFor] = useState<string | null>(null);
-  const [stageFilter, setStageFilter] = useState<Stage | "all">("all");
+  const [stageFilter, setStageFilter] = useState<Stage | "all">(initialStage);
   const [month, setMonth] = useState("");
   const [creating, setCreating] = useState(false);
   const [showArchived, setShowArchived] = useState(false);

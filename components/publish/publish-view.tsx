@@ -5,7 +5,7 @@
  * the checklist that gates the move to published.
  */
 import Link from "next/link";
-import { useEffect, useState } from "react";
+import { useState } from "react";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson, ApiError } from "@/components/fetch-json";
 import { useWrite } from "@/components/use-write";
@@ -25,31 +25,26 @@ function Meter({ used, max, unit, label }: { used: number; max: number; unit: st
   );
 }
 
-export function PublishView({ episodeId, base, canEdit, canMarkFinal, canPublish, isOwner }: { episodeId: string; base: string; canEdit: boolean; canMarkFinal: boolean; canPublish: boolean; isOwner: boolean }) {
+type Props = { episodeId: string; base: string; canEdit: boolean; canMarkFinal: boolean; canPublish: boolean; isOwner: boolean };
+
+export function PublishView(props: Props) {
+  const q = useQuery({ queryKey: ["publish", props.episodeId], queryFn: () => fetchJson<PublishDto>(`/api/episodes/${props.episodeId}/publish`) });
+  if (!q.data) return <p className="text-walnut-700">{q.error ? (q.error as Error).message : "Putting the package together…"}</p>;
+  return <PublishEditor {...props} d={q.data} />;
+}
+
+/** The texts start from the stored package and are the team's while they type; each saves on leaving its field. */
+function PublishEditor({ episodeId, base, canEdit, canMarkFinal, canPublish, isOwner, d }: Props & { d: PublishDto }) {
   const key = ["publish", episodeId];
   const qc = useQueryClient();
-  const q = useQuery({ queryKey: key, queryFn: () => fetchJson<PublishDto>(`/api/episodes/${episodeId}/publish`) });
   const write = useWrite({ scope: `publish:${episodeId}` });
-  const d = q.data;
-  const [title, setTitle] = useState("");
-  const [summary, setSummary] = useState("");
-  const [closing, setClosing] = useState("");
-  const [loaded, setLoaded] = useState(false);
+  const [title, setTitle] = useState(d.package.title);
+  const [summary, setSummary] = useState(d.package.summary);
+  const [closing, setClosing] = useState(d.package.closing);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState<string | null>(null);
   const [reason, setReason] = useState("");
   const [copied, setCopied] = useState(false);
-
-  useEffect(() => {
-    if (d && !loaded) {
-      setTitle(d.package.title);
-      setSummary(d.package.summary);
-      setClosing(d.package.closing);
-      setLoaded(true);
-    }
-  }, [d, loaded]);
-
-  if (!d) return <p className="text-walnut-700">{q.error ? (q.error as Error).message : "Putting the package together…"}</p>;
 
   // The same composition the server runs, live as the team types.
   const description = composeDescription({ ...d.parts, summary, closing, sections: d.package.sections });
@@ -243,7 +238,7 @@ export function PublishView({ episodeId, base, canEdit, canMarkFinal, canPublish
                   </p>
                   <p className="text-walnut-700">{i.detail}</p>
                   {!i.pass ? (
-                    i.key === "script_final" && canMarkFinal ? (
+                    i.action === "mark_final" && canMarkFinal ? (
                       <Button type="button" className="mt-1" onClick={() => void run("Marking…", () => write<PublishDto>(`/api/episodes/${episodeId}/publish/script-final`, "PUT", { final: true }))}>
                         Mark the script final
                       </Button>

@@ -37,7 +37,7 @@ export const thumbnailSetSchema = z.object({ key: z.string().min(1, "the uploade
 /** Body of PUT /api/episodes/{episodeId}/publish/script-final. */
 export const scriptFinalSchema = z.object({ final: z.boolean() }).strict().meta({ id: "ScriptFinal" });
 
-const checklistItemSchema = z.object({ key: z.enum(CHECKLIST_KEYS), label: z.string(), pass: z.boolean(), detail: z.string(), tab: z.string() });
+const checklistItemSchema = z.object({ key: z.enum(CHECKLIST_KEYS), label: z.string(), pass: z.boolean(), detail: z.string(), tab: z.string(), action: z.enum(["mark_final"]).nullable() });
 export const checklistSchema = z.object({ items: z.array(checklistItemSchema), pass: z.boolean(), failing: z.array(z.enum(CHECKLIST_KEYS)) }).meta({ id: "PublishChecklist" });
 export type ChecklistDto = z.infer<typeof checklistSchema>;
 
