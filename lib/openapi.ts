@@ -8,7 +8,7 @@ import { errorResponseSchema, okSchema } from "./schemas/common";
 import { episodeCreateSchema, episodeListQuerySchema, episodeSchema, episodeUpdateSchema } from "./schemas/episode";
 import { channelSchema, channelSettingsSchema, channelUpdateSchema, invitationAcceptSchema, invitationCreateSchema, invitationSchema, mailSchema, memberRolesSchema, memberSchema, resetConfirmSchema, resetRequestSchema } from "./schemas/account";
 import { ROLES } from "./roles";
-import { overviewSchema, publishSchema, publishUpdateSchema, scriptFinalSchema, thumbnailSetSchema, thumbnailUploadSchema } from "./schemas/publish";
+import { importQuerySchema, overviewSchema, publishSchema, publishUpdateSchema, scriptFinalSchema, thumbnailSetSchema, thumbnailUploadSchema } from "./schemas/publish";
 import { invoiceSchema, invoicesSchema, dealReviewSchema, guestReviewSchema, reviewDecisionSchema, reviewLinkCreateSchema, reviewReplySchema, dealCreateSchema, dealSchema, dealUpdateSchema, deliverableCreateSchema, deliverableSchema, sponsorChecksSchema, sponsorCreateSchema, sponsorSchema, sponsorUpdateSchema } from "./schemas/sponsors";
 import { callSheetSchema, callSheetSendSchema, daysAwayListSchema, daysAwaySchema, scheduleSchema, shootDayCreateSchema, shootDayListQuerySchema, shootDaySchema, shootDayUpdateSchema } from "./schemas/shoot";
 import { cutListSchema, materialCreateSchema, materialSchema, materialUpdateSchema, photoUploadSchema, planSchema, stepCreateSchema, stepFailureSchema, stepOrderSchema, stepUpdateSchema, toolCreateSchema, toolSchema, toolUpdateSchema } from "./schemas/build";
@@ -150,6 +150,8 @@ export const ROUTES: RouteDoc[] = [
   { method: "delete", path: "/api/episodes/{episodeId}/publish/thumbnail", summary: "Remove the thumbnail", response: publishSchema, errors: [401, 403, 404] },
   { method: "put", path: "/api/episodes/{episodeId}/publish/script-final", summary: "Mark the script final as it stands, or take the mark away", body: scriptFinalSchema, response: publishSchema, errors: [400, 401, 403, 404, 422] },
   { method: "get", path: "/api/channels/{channelId}/overview", summary: "The channel at a glance: pipeline by stage, shoot days and sponsor dates ahead, publish dates, open gaps, runtime against target", response: overviewSchema, errors: [401, 404] },
+  { method: "get", path: "/api/channels/{channelId}/export", summary: "Owner: the whole channel as a streamed, signed zip (records as JSON lines, the stored objects' manifest; the bytes stay in storage)", response: z.string().meta({ description: "application/zip" }), errors: [401, 403, 404] },
+  { method: "post", path: "/api/channels/import", summary: "Import an export as a new channel (body: the zip as application/zip; caller must own the exported channel). Nothing is written unless the whole file verifies.", query: importQuerySchema, textBody: "application/zip", response: z.object({ channelId: z.string(), rows: z.number(), objects: z.number() }), status: 201, errors: [400, 401, 404, 422, 502] },
   { method: "get", path: "/api/openapi.json", summary: "This document", auth: false, response: z.object({}).passthrough(), errors: [] },
   { method: "post", path: "/api/auth/callback/credentials", summary: "Sign in with e-mail and password (next-auth form post; throttled per account and address)", auth: false, response: z.object({ url: z.string() }), errors: [429] },
 ];

@@ -1,5 +1,5 @@
 import "server-only";
-import { S3Client, HeadBucketCommand, HeadObjectCommand } from "@aws-sdk/client-s3";
+import { CopyObjectCommand, DeleteObjectCommand, S3Client, HeadBucketCommand, HeadObjectCommand } from "@aws-sdk/client-s3";
 import { env } from "../lib/env";
 
 const g = globalThis as unknown as { __jigboardS3?: S3Client };
@@ -43,4 +43,13 @@ export async function headObject(key: string): Promise<{ size: number | undefine
     .send(new HeadObjectCommand({ Bucket: bucket(), Key: key }))
     .catch(() => null);
   return head ? { size: head.ContentLength, contentType: head.ContentType } : null;
+}
+
+/** Copies an object inside the bucket, store to store: the bytes never pass through the app (one request up to 5 GB). */
+export async function copyObject(from: string, to: string): Promise<void> {
+  await s3().send(new CopyObjectCommand({ Bucket: bucket(), Key: to, CopySource: `${bucket()}/${encodeURIComponent(from).replace(/%2F/g, "/")}` }));
+}
+
+export async function deleteObject(key: string): Promise<void> {
+  await s3().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
 }

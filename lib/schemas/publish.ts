@@ -78,3 +78,6 @@ export const overviewSchema = z
   })
   .meta({ id: "ChannelOverview" });
 export type OverviewDto = z.infer<typeof overviewSchema>;
+
+/** Query of POST /api/channels/import. */
+export const importQuerySchema = z.object({ name: z.string().trim().min(1, "give the new channel a name").max(120, "at most 120 characters").optional() }).strict().meta({ id: "ImportQuery" });

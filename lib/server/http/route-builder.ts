@@ -167,12 +167,12 @@ export function channelRoute<L extends LoadKind, B extends z.ZodType | undefined
 
 /** A route about the signed-in person themselves (their channels, their reading rate). */
 export function userRoute<B extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined>(
-  spec: { body?: B; query?: Q; what?: string },
+  spec: { body?: B; query?: Q; what?: string; accepts?: readonly string[] },
   handler: (ctx: { req: Request; user: SessionUser; body: Out<B>; query: Out<Q>; params: Record<string, string> }) => Promise<Response>,
 ): Handler {
   const fn = route<Record<string, string>>(async (req, params) => {
     const user = await sessionUser(req);
-    assertContentType(req);
+    assertContentType(req, spec.accepts);
     const query = (spec.query ? parseQuery(req, spec.query) : undefined) as Out<Q>;
     const body = (spec.body ? await parseBody(req, spec.body, spec.what) : undefined) as Out<B>;
     return handler({ req, user, body, query, params });
