@@ -57,3 +57,7 @@ scheduleBench();
 // The footage upload benchmark starts its own services and app.
 const { uploadBench } = await import("./upload");
 await uploadBench();
+
+// Channel export and import through the app server, with its own services.
+const { archiveBench } = await import("./archive");
+await archiveBench();

@@ -5,33 +5,16 @@
  * throughput ratio and the app server's peak RSS growth while the file moves.
  * BENCH_UPLOAD_BYTES overrides the 2 GiB default.
  */
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import http from "node:http";
-import fs from "node:fs";
-import path from "node:path";
 import crypto from "node:crypto";
-import { drizzle } from "drizzle-orm/node-postgres";
-import pg from "pg";
-import { encode } from "next-auth/jwt";
 import { S3Client, CreateMultipartUploadCommand, UploadPartCommand, CompleteMultipartUploadCommand, DeleteObjectCommand } from "@aws-sdk/client-s3";
-import { startLocalServices } from "../../lib/server/local/services";
-import { buildIsStale } from "../../lib/server/local/build-check";
 import * as schema from "../../db/schema";
+import { rssKiB, startBenchApp } from "./app";
 
 const SIZE = Number(process.env.BENCH_UPLOAD_BYTES ?? 2 * 1024 ** 3);
 const PART = 16 * 1024 * 1024;
 const CONCURRENCY = 4;
 const PORT = 3300;
-const root = process.cwd();
-
-function rssKiB(pid: number): number {
-  try {
-    const m = /VmRSS:\s+(\d+)/.exec(fs.readFileSync(`/proc/${pid}/status`, "utf8"));
-    return m ? Number(m[1]) : 0;
-  } catch {
-    return 0;
-  }
-}
 
 /** PUTs one part with node:http, the same client stack the SDK uses, so the two flows differ only in who signs. */
 const agent = new http.Agent({ keepAlive: true, maxSockets: 16 });
@@ -54,28 +37,13 @@ async function pool<T>(items: T[], n: number, fn: (t: T) => Promise<void>) {
 }
 
 export async function uploadBench() {
-  for (const k of ["DATABASE_URL", "S3_ENDPOINT", "SMTP_URL"]) delete process.env[k];
-  const dataRoot = path.join(root, ".test-data", "bench");
-  fs.rmSync(dataRoot, { recursive: true, force: true });
-  const services = await startLocalServices({ dataRoot, ports: { postgres: 54349, s3: 54350, smtp: 54345, payments: 54346 }, database: "jigboard_bench", fast: true, log: () => {} });
-  let app: ChildProcess | undefined;
+  const bench = await startBenchApp({ name: "bench", port: PORT, basePort: 54349, env: { UPLOAD_PART_BYTES: String(PART) } });
+  const { services, db, app, cookie, user } = bench;
   try {
-    const db = drizzle(new pg.Pool({ connectionString: services.env.DATABASE_URL }), { schema });
-    const [user] = await db.insert(schema.users).values({ email: `bench-${Date.now()}@bench.example`, name: "Bench", passwordHash: "x" }).returning();
     const [channel] = await db.insert(schema.channels).values({ name: "Bench" }).returning();
-    await db.insert(schema.memberships).values({ channelId: channel!.id, userId: user!.id, roles: ["editor"] });
+    await db.insert(schema.memberships).values({ channelId: channel!.id, userId: user.id, roles: ["editor"] });
     const [episode] = await db.insert(schema.episodes).values({ channelId: channel!.id, title: "Bench", stage: "editing", position: 0 }).returning();
-    const secret = crypto.randomBytes(32).toString("base64url");
-    const env = { ...process.env, ...services.env, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: `http://127.0.0.1:${PORT}`, UPLOAD_PART_BYTES: String(PART), NODE_ENV: "production" as const, NEXT_TELEMETRY_DISABLED: "1" };
-    const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
-    if (buildIsStale(root)) spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env });
-    app = spawn(process.execPath, [path.join(root, "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(PORT)], { env, stdio: "ignore" });
-    for (let i = 0; i < 200; i++) {
-      if (await fetch(`http://127.0.0.1:${PORT}/api/health`).then((r) => r.ok).catch(() => false)) break;
-      await new Promise((r) => setTimeout(r, 250));
-    }
     const chunk = crypto.randomBytes(PART);
-    const cookie = `next-auth.session-token=${await encode({ token: { sub: user!.id }, secret })}`;
     const partBody = (n: number, count: number) => (n < count ? chunk : chunk.subarray(0, SIZE - PART * (count - 1)));
     const call = async (url: string, method: string, body?: unknown) => {
       const r = await fetch(`http://127.0.0.1:${PORT}${url}`, { method, headers: { cookie, "content-type": "application/json" }, body: body ? JSON.stringify(body) : undefined });
@@ -160,9 +128,7 @@ export async function uploadBench() {
       }),
     );
   } finally {
-    if (app) app.kill("SIGTERM");
-    await services.stop();
-    fs.rmSync(dataRoot, { recursive: true, force: true });
+    await bench.stop();
   }
 }
 

@@ -103,11 +103,16 @@ export async function exportChannel(channelId: string): Promise<Readable> {
     const users = await referencedUsers(client, channelId, USER_COLUMNS);
     const files: Record<string, { rows: number; sha256: string }> = {};
     const zip = new ZipArchive({ zlib: { level: 6 } });
-    let signalDone: () => void = () => undefined;
-    const allWritten = new Promise<void>((r) => (signalDone = r));
+    // Each entry's rows and hash are known when its generator ends; the manifest waits for all of them.
+    const written: Promise<void>[] = [];
 
-    const entry = (name: string, lines: () => AsyncGenerator<string>, last = false) => {
+    const entry = (name: string, lines: () => AsyncGenerator<string>) => {
+      let finished: () => void = () => undefined;
+      // archiver may start reading every appended stream at once; each entry waits for the one before, so one cursor runs at a time.
+      const before = written.at(-1);
+      written.push(new Promise<void>((r) => (finished = r)));
       const gen = async function* () {
+        await before;
         const h = crypto.createHash("sha256");
         let rows = 0;
         for await (const line of lines()) {
@@ -117,7 +122,7 @@ export async function exportChannel(channelId: string): Promise<Readable> {
           yield buf;
         }
         files[name] = { rows, sha256: h.digest("hex") };
-        if (last) signalDone();
+        finished();
       };
       zip.append(Readable.from(gen(), { objectMode: false }), { name, date: new Date(0) });
     };
@@ -165,14 +170,14 @@ export async function exportChannel(channelId: string): Promise<Readable> {
           await closeCursor(client, cursor);
         }
       },
-      true,
     );
     // The manifest is made last, when every entry before it has been written and hashed.
     zip.append(
       Readable.from(
         (async function* () {
-          await allWritten;
-          const body = { ...header, files };
+          await Promise.all(written);
+          // Sorted by name, whatever order the entries finished in.
+          const body = { ...header, files: Object.fromEntries(Object.keys(files).sort().map((k) => [k, files[k]!])) };
           yield Buffer.from(JSON.stringify({ body, signature: signManifest(body) }));
         })(),
       ),
