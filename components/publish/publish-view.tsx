@@ -198,8 +198,8 @@ function PublishEditor({ episodeId, base, canEdit, canMarkFinal, canPublish, isO
             {description || "Nothing yet."}
           </pre>
           <Meter used={texts.descriptionBytes} max={d.limits.descriptionMaxBytes} unit="bytes" label="description" />
-          {d.chapters.lines.length ? (
-            <ul className="mt-2 space-y-0.5 text-sm" aria-label="Chapters">
+          {d.chapters.lines.some((c) => c.problems.length) ? (
+            <ul className="mt-2 space-y-0.5 text-sm" aria-label="Chapter problems">
               {d.chapters.lines.map((c) => (
                 <li key={c.line} className={c.problems.length ? "text-fault-700" : ""}>
                   <span className="num">{c.line}</span>
