@@ -47,7 +47,7 @@ export function OverviewView({ channelId }: { channelId: string }) {
       <Card title="Episodes by stage" id="ov-pipeline" action={<Link className="text-sm underline" href={`/c/${channelId}`}>Open the board</Link>}>
         <div className="h-56" aria-hidden>
           <ResponsiveContainer width="100%" height="100%">
-            <BarChart data={d.pipeline} layout="vertical" margin={{ left: 8, right: 16 }}>
+            <BarChart data={d.pipeline} layout="vertical" margin={{ left: 8, right: 16 }} accessibilityLayer={false}>
               <CartesianGrid horizontal={false} className="stroke-timber-200" />
               <XAxis type="number" allowDecimals={false} tick={{ fontSize: 12 }} />
               <YAxis type="category" dataKey="label" width={92} tick={{ fontSize: 12 }} />
@@ -78,7 +78,7 @@ export function OverviewView({ channelId }: { channelId: string }) {
           <>
             <div style={{ height: 40 + runtime.length * 34 }} aria-hidden>
               <ResponsiveContainer width="100%" height="100%">
-                <BarChart data={runtime} layout="vertical" margin={{ left: 8, right: 16 }} barGap={1}>
+                <BarChart data={runtime} layout="vertical" margin={{ left: 8, right: 16 }} barGap={1} accessibilityLayer={false}>
                   <CartesianGrid horizontal={false} className="stroke-timber-200" />
                   <XAxis type="number" tick={{ fontSize: 12 }} />
                   <YAxis type="category" dataKey="name" width={150} tick={{ fontSize: 11 }} tickFormatter={(t: string) => (t.length > 24 ? `${t.slice(0, 23)}…` : t)} />

@@ -194,7 +194,7 @@ function PublishEditor({ episodeId, base, canEdit, canMarkFinal, canPublish, isO
               {copied ? "Copied" : "Copy description"}
             </Button>
           </div>
-          <pre className="mt-1 max-h-96 overflow-auto whitespace-pre-wrap rounded-plank border border-timber-200 bg-timber-50 p-2 font-sans text-sm" data-testid="description-preview">
+          <pre tabIndex={0} role="region" aria-label="Description as it will read" className="mt-1 max-h-96 overflow-auto whitespace-pre-wrap rounded-plank border border-timber-200 bg-timber-50 p-2 font-sans text-sm" data-testid="description-preview">
             {description || "Nothing yet."}
           </pre>
           <Meter used={texts.descriptionBytes} max={d.limits.descriptionMaxBytes} unit="bytes" label="description" />
