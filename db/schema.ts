@@ -504,8 +504,14 @@ export const shootLogNotes = pgTable(
     shootDayId: uuid("shoot_day_id").references(() => shootDays.id, { onDelete: "set null" }),
     stepId: uuid("step_id").references(() => buildSteps.id, { onDelete: "set null" }),
     segmentId: uuid("segment_id").references(() => scriptSegments.id, { onDelete: "set null" }),
+    /** The clip being recorded when the note was taken. */
+    clipId: uuid("clip_id").references(() => clips.id, { onDelete: "set null" }),
+    /** The pickup shot made from the note. */
+    shotId: uuid("shot_id").references(() => shots.id, { onDelete: "set null" }),
     authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
+    /** When the note was written on the device (it may arrive later, from an offline queue). */
     notedAt: timestamp("noted_at", { withTimezone: true }).notNull().defaultNow(),
+    receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
     text: text("text").notNull(),
   },
   (t) => [index("shoot_log_notes_episode_idx").on(t.episodeId, t.notedAt)],
@@ -707,6 +713,29 @@ export const publishOverrides = pgTable(
   (t) => [index("publish_overrides_episode_idx").on(t.episodeId, t.createdAt)],
 );
 
+/* ───────────── live updates ───────────── */
+
+/**
+ * What changed, written by triggers in the same transaction as the change and
+ * announced with NOTIFY on commit, so every app instance can tell its
+ * connected browsers. Kept a day for reconnects (Last-Event-ID).
+ */
+export const liveEvents = pgTable(
+  "live_events",
+  {
+    id: bigint("id", { mode: "number" }).primaryKey().generatedAlwaysAsIdentity(),
+    channelId: uuid("channel_id").notNull(),
+    episodeId: uuid("episode_id"),
+    /** The table that changed. */
+    kind: text("kind").notNull(),
+    op: text("op").notNull(),
+    /** Ids of the changed rows (at most 100; more says only that many changed). */
+    recordIds: text("record_ids").array().notNull(),
+    at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("live_events_channel_idx").on(t.channelId, t.id)],
+);
+
 /* ───────────── mail and audit ───────────── */
 
 /** Messages received by the local SMTP fake (the dev mailbox). */
@@ -793,3 +822,4 @@ export type Deal = typeof deals.$inferSelect;
 export type Deliverable = typeof deliverables.$inferSelect;
 export type GuestLink = typeof guestLinks.$inferSelect;
 export type PublishPackage = typeof publishPackages.$inferSelect;
+export type ShootLogNote = typeof shootLogNotes.$inferSelect;

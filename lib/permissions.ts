@@ -35,6 +35,8 @@ export const ACTIONS = {
   "deals.fees": ["owner", "sponsor_liaison"],
   "invoices.manage": ["owner", "sponsor_liaison"],
   "publish.edit": ["owner", "presenter", "editor"],
+  // Notes at the bench while filming (everyone on the crew; the liaison reads them).
+  "shootlog.write": ["owner", "presenter", "editor", "producer"],
   // Every record of the channel leaves in the export; importing it makes a new channel.
   "channel.export": ["owner"],
 } as const satisfies Record<string, readonly Role[]>;

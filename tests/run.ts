@@ -75,10 +75,11 @@ async function main() {
     log: (m) => console.log(`[test] ${m}`),
   });
   let app: ReturnType<typeof spawn> | undefined;
+  let appB: ReturnType<typeof spawn> | undefined;
   let worker: ReturnType<typeof spawn> | undefined;
   const totals = { passed: 0, failed: 0 };
   const stop = async () => {
-    for (const c of [app, worker]) {
+    for (const c of [app, appB, worker]) {
       if (!c?.pid) continue;
       try {
         process.kill(-c.pid, "SIGTERM");
@@ -101,6 +102,7 @@ async function main() {
       NEXTAUTH_SECRET: crypto.randomBytes(32).toString("base64url"),
       NEXTAUTH_URL: `http://127.0.0.1:${appPort}`,
       JIGBOARD_TEST_URL: `http://127.0.0.1:${appPort}`,
+      JIGBOARD_TEST_URL_B: `http://127.0.0.1:${appPort + 1}`,
       NEXT_TELEMETRY_DISABLED: "1",
       SIGN_IN_MAX_FAILURES: "5",
       // The tests act as the proxy in front of the app: X-Forwarded-For names the client.
@@ -121,8 +123,15 @@ async function main() {
         stdio: ["ignore", fs.openSync(path.join(artifacts, "app.log"), "w"), fs.openSync(path.join(artifacts, "app.err.log"), "w")],
         detached: true,
       });
+      // A second instance on the same database and storage, as behind a load balancer: live updates must cross between them.
+      appB = spawn(process.execPath, [path.join(root, "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(appPort + 1)], {
+        env: { ...env, NODE_ENV: "production", NEXTAUTH_URL: `http://127.0.0.1:${appPort + 1}` },
+        stdio: ["ignore", fs.openSync(path.join(artifacts, "app-b.log"), "w"), fs.openSync(path.join(artifacts, "app-b.err.log"), "w")],
+        detached: true,
+      });
       await waitFor(`http://127.0.0.1:${appPort}/api/health`, 60_000);
-      console.log(`[test] app on http://127.0.0.1:${appPort}`);
+      await waitFor(`http://127.0.0.1:${appPort + 1}/api/health`, 60_000);
+      console.log(`[test] app on http://127.0.0.1:${appPort} and a second instance on http://127.0.0.1:${appPort + 1}`);
       // The job worker, as npm start runs it: queued call sheets are mailed by it.
       worker = spawn(process.execPath, [path.join(root, "node_modules", "tsx", "dist", "cli.mjs"), "--conditions=react-server", path.join(root, "lib", "server", "jobs", "worker.ts")], {
         env: { ...env, JOB_POLL_SECONDS: "0.5" },

@@ -13,6 +13,7 @@ import { SegmentEditor, type SaveState, type SegmentHandle } from "./segment-edi
 import { ApiError as SaveError, fetchJson } from "@/components/fetch-json";
 import type { ScriptDto, SegmentDto } from "@/lib/schemas/script";
 import { useWrite } from "@/components/use-write";
+import { useLive } from "@/components/live/live-provider";
 
 /** The script as the editor keeps it: the server's timing is not kept, the editor times every keystroke itself. */
 type ScriptData = Pick<ScriptDto, "rate" | "wordsPerMinute"> & { segments: SegmentDto[] };
@@ -39,6 +40,7 @@ function signedSeconds(frames: number, rate: Rate) {
 
 export function ScriptEditor(p: Props) {
   const write = useWrite({ scope: `script:${p.episodeId}` });
+  const liveNow = useLive();
   const qc = useQueryClient();
   const key = useMemo(() => ["script", p.episodeId], [p.episodeId]);
   const { data, error } = useQuery({ queryKey: key, queryFn: () => fetchJson<ScriptData>(`/api/episodes/${p.episodeId}/script`), refetchOnWindowFocus: false });
@@ -266,6 +268,10 @@ export function ScriptEditor(p: Props) {
                 onJoinPrevious={joinPrevious}
                 onMove={move}
                 onInsertAfter={(id) => void add(id, segments.find((x) => x.id === id)?.stepId ?? null)}
+                editingBy={Object.values(liveNow.presence)
+                  .filter((x) => x.episodeId === p.episodeId && x.segmentId === s.id)
+                  .map((x) => x.userName)}
+                onPresence={(segmentId) => void write(`/api/episodes/${p.episodeId}/presence`, "POST", { segmentId }).catch(() => undefined)}
                 onDelete={async (id) => {
                   if (!window.confirm("Delete this segment? It stays in the history and can be restored.")) return;
                   await write(`/api/segments/${id}`, "DELETE").catch(fail);

@@ -33,6 +33,9 @@ interface Props {
   onMove: (id: string, delta: -1 | 1) => void;
   onInsertAfter: (id: string) => void;
   onDelete: (id: string) => void;
+  /** Others editing this segment right now (from live presence). */
+  editingBy?: string[];
+  onPresence?: (segmentId: string | null) => void;
 }
 
 function secs(frames: number, rate: Rate) {
@@ -184,16 +187,25 @@ export const SegmentEditor = forwardRef<SegmentHandle, Props>(function SegmentEd
             {base.explicitDurationFrames != null ? <span className="num">Fixed length {secs(base.explicitDurationFrames, rate)} s</span> : null}
           </p>
         )}
+        {props.editingBy?.length ? (
+          <p className="text-xs font-medium text-heed-800" data-testid="presence" role="status">
+            {props.editingBy.join(", ")} {props.editingBy.length === 1 ? "is" : "are"} editing this segment
+          </p>
+        ) : null}
         {canWrite ? (
         <textarea
             ref={area}
+            onFocus={() => props.onPresence?.(segment.id)}
             aria-label={`Segment ${index + 1} text`}
             readOnly={!canWrite}
             value={text}
             rows={Math.max(2, Math.ceil(text.length / 90))}
             className="w-full resize-y rounded-plank border border-timber-200 bg-timber-50/40 px-2 py-1.5 text-[15px] leading-relaxed focus:bg-white"
             onChange={(e) => onChange(e.target.value)}
-            onBlur={() => void flushText()}
+            onBlur={() => {
+              void flushText();
+              props.onPresence?.(null);
+            }}
             onKeyDown={(e) => {
               if (!canWrite) return;
               const el = e.currentTarget;

@@ -23,6 +23,8 @@ for (const w of WIDTHS) {
     test.setTimeout(180_000);
     const ctx = await browser.newContext({ viewport: w.viewport, hasTouch: w.touch, isMobile: w.touch });
     const page = await ctx.newPage();
+    // The live-update stream stays open for ever, so "network idle" would never come: these pages are audited without it.
+    await page.route(/\/api\/channels\/[^/]+\/live/, (r) => r.fulfill({ status: 204, body: "" }));
     const found: string[] = [];
 
     for (const path of ["/sign-in", "/forgot-password"]) {

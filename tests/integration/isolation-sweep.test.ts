@@ -7,7 +7,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import fs from "node:fs";
 import path from "node:path";
 import { db } from "@/db/client";
-import { buildSteps, clips, coverageRanges, deals, deliverables, gaps, invitations, materials, scriptRevisions, scriptSegments, shootDays, shots, sponsors, tools } from "@/db/schema";
+import { buildSteps, clips, coverageRanges, deals, deliverables, gaps, invitations, materials, scriptRevisions, scriptSegments, shootDays, shootLogNotes, shots, sponsors, tools } from "@/db/schema";
 import { call, makeEpisode, makeWorld } from "../support/fixtures";
 
 type World = Awaited<ReturnType<typeof makeWorld>>;
@@ -41,7 +41,9 @@ beforeAll(async () => {
   const [sponsor] = await db().insert(sponsors).values({ channelId: w.channel.id, name: "Private sponsor" }).returning();
   const [deal] = await db().insert(deals).values({ channelId: w.channel.id, sponsorId: sponsor!.id, title: "Private deal" }).returning();
   const [deliverable] = await db().insert(deliverables).values({ dealId: deal!.id, kind: "spoken_disclosure" }).returning();
+  const [note] = await db().insert(shootLogNotes).values({ episodeId: ep.id, text: "private note" }).returning();
   Object.assign(ids, {
+    noteId: note!.id,
     sponsorId: sponsor!.id,
     dealId: deal!.id,
     deliverableId: deliverable!.id,

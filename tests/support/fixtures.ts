@@ -59,6 +59,19 @@ export async function call(
     body: opts.rawBody ?? (opts.body === undefined ? undefined : JSON.stringify(opts.body)),
   });
   const res = await handler(req, { params: Promise.resolve(opts.params ?? {}) });
+  if ((res.headers.get("content-type") ?? "").startsWith("text/event-stream") && res.body) {
+    // A live stream never ends by itself: read up to its "ready" (or "revoked") event, then hang up.
+    const reader = res.body.getReader();
+    const dec = new TextDecoder();
+    let text = "";
+    while (!/event: (ready|revoked)/.test(text)) {
+      const { value, done } = await reader.read();
+      if (done) break;
+      text += dec.decode(value);
+    }
+    await reader.cancel();
+    return { status: res.status, json: text as any, headers: res.headers };
+  }
   const text = await res.text();
   let json: any = null;
   try {

@@ -6,7 +6,7 @@ import fs from "node:fs";
 import path from "node:path";
 import crypto from "node:crypto";
 import { db } from "../../db/client";
-import { buildSteps, clips, coverageRanges, deals, deliverables, gaps, guestLinks, invitations, materials, scriptRevisions, scriptSegments, shootDays, shots, sponsors, tools } from "../../db/schema";
+import { buildSteps, clips, coverageRanges, deals, deliverables, gaps, guestLinks, invitations, materials, scriptRevisions, scriptSegments, shootDays, shootLogNotes, shots, sponsors, tools } from "../../db/schema";
 import type { BuiltSpec, LoadKind } from "../../lib/server/http/route-builder";
 import { makeEpisode } from "./fixtures";
 
@@ -57,9 +57,10 @@ export async function recordsOfEveryKind(channelId: string, userId: string): Pro
   const [deal] = await db().insert(deals).values({ channelId, sponsorId: sponsor!.id, title: "Route test deal" }).returning();
   const [deliverable] = await db().insert(deliverables).values({ dealId: deal!.id, kind: "spoken_disclosure" }).returning();
   const [reviewLink] = await db().insert(guestLinks).values({ dealId: deal!.id, tokenHash: crypto.randomUUID(), expiresAt: new Date(Date.now() + 86400000) }).returning();
+  const [note] = await db().insert(shootLogNotes).values({ episodeId: episode.id, stepId: step!.id, authorId: userId, text: "The string stretched; use a batten." }).returning();
   const [invitation] = await db().insert(invitations).values({ channelId, email: `m-${crypto.randomUUID().slice(0, 6)}@test.example`, roles: ["editor"], tokenHash: crypto.randomUUID(), expiresAt: new Date(Date.now() + 86400000) }).returning();
   return {
-    ids: { channel: channelId, episode: episode.id, step: step!.id, material: material!.id, tool: tool!.id, segment: segment!.id, clip: clip!.id, shot: shot!.id, gap: gap!.id, range: range!.id, revision: revision!.id, shootDay: shootDay!.id, sponsor: sponsor!.id, deal: deal!.id, deliverable: deliverable!.id, reviewLink: reviewLink!.id },
+    ids: { channel: channelId, episode: episode.id, step: step!.id, material: material!.id, tool: tool!.id, segment: segment!.id, clip: clip!.id, shot: shot!.id, gap: gap!.id, range: range!.id, revision: revision!.id, shootDay: shootDay!.id, sponsor: sponsor!.id, deal: deal!.id, deliverable: deliverable!.id, reviewLink: reviewLink!.id, note: note!.id },
     invitationId: invitation!.id,
   };
 }

@@ -21,6 +21,7 @@ import { loadClip, loadEpisode, loadMaterial, loadSegment, loadShot, loadStep, l
 import { getGapById, getRangeById } from "../../../db/queries/coverage";
 import { getRevisionById } from "../../../db/queries/script";
 import { getShootDayById } from "../../../db/queries/shoot-days";
+import { getNoteById } from "../../../db/queries/shoot-log";
 import { getDealById, getDeliverableById, getGuestLinkById, getLiveGuestLinkByHash, getSponsorById } from "../../../db/queries/sponsors";
 import { hashToken } from "../infra/tokens";
 import type { Deal, GuestLink } from "../../../db/schema";
@@ -101,6 +102,7 @@ export const LOADERS = {
   deal: { param: "dealId", load: byChannelRow("deal", "deal", getDealById, (r) => ({ deal: r })) },
   reviewLink: { param: "reviewLinkId", load: byChannelRow("review-link", "review link", getGuestLinkById, (r) => ({ link: r.link })) },
   deliverable: { param: "deliverableId", load: byChannelRow("deliverable", "deliverable", getDeliverableById, (r) => ({ deliverable: r.deliverable })) },
+  note: { param: "noteId", load: byChannelRow("note", "shoot log note", getNoteById, (r) => ({ note: r.note })) },
 } as const;
 
 export type LoadKind = keyof typeof LOADERS;

@@ -35,16 +35,21 @@ async function lockedSegment(tx: Tx, id: string) {
 export async function createSegment({ episodeId, userId, input }: { episodeId: string; userId: string; input: SegmentCreate }) {
   return db().transaction(async (tx) => {
     await lockEpisode(tx, episodeId);
-    const ids = await orderedSegmentIds(tx, episodeId);
-    const { afterId, ...fields } = input;
-    if (afterId && !ids.includes(afterId)) return { error: "after_not_found" as const };
-    const row = await insertSegment(tx, { ...fields, episodeId, position: ids.length, updatedBy: userId });
-    const at = afterId ? ids.indexOf(afterId) + 1 : ids.length;
-    ids.splice(at, 0, row.id);
-    await writeSegmentPositions(tx, ids);
-    await writeRevision(tx, episodeId, row.id, userId, null, row);
-    return { segment: { ...row, position: at } };
+    return createSegmentIn(tx, { episodeId, userId, input });
   });
+}
+
+/** Inserts a segment after `afterId` (or at the end) inside a transaction that already holds the episode lock. */
+export async function createSegmentIn(tx: Tx, { episodeId, userId, input }: { episodeId: string; userId: string; input: SegmentCreate }) {
+  const ids = await orderedSegmentIds(tx, episodeId);
+  const { afterId, ...fields } = input;
+  if (afterId && !ids.includes(afterId)) return { error: "after_not_found" as const };
+  const row = await insertSegment(tx, { ...fields, episodeId, position: ids.length, updatedBy: userId });
+  const at = afterId ? ids.indexOf(afterId) + 1 : ids.length;
+  ids.splice(at, 0, row.id);
+  await writeSegmentPositions(tx, ids);
+  await writeRevision(tx, episodeId, row.id, userId, null, row);
+  return { segment: { ...row, position: at } };
 }
 
 /** Saves fields only if the stored version is the one the edit was based on. */
