@@ -80,6 +80,24 @@ export function MembersPanel({ channelId, members, invites, manage, selfId }: { 
                           Save roles
                         </Button>
                       ) : null}
+                      {m.userId !== selfId ? (
+                        <Button
+                          variant="danger"
+                          aria-label={`Remove ${m.name} from the channel`}
+                          onClick={async () => {
+                            if (!window.confirm(`Remove ${m.name} from the channel? What they made stays; they lose access at once.`)) return;
+                            try {
+                              await write(`/api/channels/${channelId}/members/${m.userId}`, "DELETE");
+                              setMessage({ tone: "ok", text: `${m.name} is no longer a member.` });
+                              router.refresh();
+                            } catch (e) {
+                              setMessage({ tone: "error", text: (e as Error).message });
+                            }
+                          }}
+                        >
+                          Remove
+                        </Button>
+                      ) : null}
                     </div>
                   ) : (
                     m.roles.map((r) => ROLE_LABELS[r]).join(", ")

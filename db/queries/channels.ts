@@ -46,6 +46,10 @@ export async function setMemberRoles(tx: Q, channelId: string, userId: string, r
   await tx.update(memberships).set({ roles }).where(and(eq(memberships.channelId, channelId), eq(memberships.userId, userId)));
 }
 
+export async function deleteMembership(tx: Tx, channelId: string, userId: string) {
+  await tx.delete(memberships).where(and(eq(memberships.channelId, channelId), eq(memberships.userId, userId)));
+}
+
 export async function updateChannel({ id, patch }: { id: string; patch: Partial<Pick<typeof channels.$inferInsert, "name" | "units" | "currency" | "brollGapMs" | "toCameraMaxMs" | "timeZone">> }) {
   const [row] = await db().update(channels).set(patch).where(eq(channels.id, id)).returning();
   return row ?? null;

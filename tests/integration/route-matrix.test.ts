@@ -8,7 +8,9 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { can, type Action } from "@/lib/permissions";
 import { ROLES } from "@/lib/roles";
-import { call, makeWorld } from "../support/fixtures";
+import { call, makeUser, makeWorld } from "../support/fixtures";
+import { db } from "@/db/client";
+import { memberships } from "@/db/schema";
 import { listRoutes, paramsFor, recordsOfEveryKind, type RouteEntry } from "../support/routes";
 
 // next-auth's own handler; it throttles and refuses odd input itself (see http.test.ts).
@@ -25,7 +27,14 @@ beforeAll(async () => {
 
 async function callAs(e: RouteEntry, user: { id: string } | null, channelId: string, ownerId: string) {
   const { ids, invitationId } = await recordsOfEveryKind(channelId, ownerId);
-  const params = paramsFor(e, ids, { invitationId, userId: w.members.producer.id });
+  // Removing a member is real: it gets a member of its own each time, so the roles of the world stay.
+  let userId = w.members.producer.id;
+  if (e.method === "DELETE" && e.file.includes("members/[userId]")) {
+    const temp = await makeUser("removable");
+    await db().insert(memberships).values({ channelId, userId: temp.id, roles: ["editor"] });
+    userId = temp.id;
+  }
+  const params = paramsFor(e, ids, { invitationId, userId });
   const write = e.method !== "GET";
   return call(e.handler as never, { method: e.method, params, user, path: "/x", ...(write ? { body: {} } : {}) });
 }

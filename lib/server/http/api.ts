@@ -84,8 +84,10 @@ export function assertSameOrigin(req: Request): void {
 /** A write's body must come as JSON, or as a type the route names; checked once the caller may write at all. */
 export function assertContentType(req: Request, accepts: readonly string[] = ["application/json"]): void {
   if (!WRITES.has(req.method)) return;
+  // RFC 9112 §6.3: a request from the wire without Content-Length or Transfer-Encoding has no body (Next still hands an empty stream).
+  // A Request made in-process (no Host, no framing headers) has one when it was given one.
   const length = req.headers.get("content-length");
-  const hasBody = req.body !== null && length !== "0";
+  const hasBody = req.body !== null && (length !== null ? length !== "0" : req.headers.has("transfer-encoding") || !req.headers.has("host"));
   if (!hasBody) return;
   const type = (req.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
   if (!accepts.includes(type)) {

@@ -13,7 +13,7 @@ import {
   spendAllResetTokens,
   spendResetToken,
 } from "../../../db/queries/auth";
-import { lockMemberships, setMemberRoles } from "../../../db/queries/channels";
+import { deleteMembership, lockMemberships, setMemberRoles } from "../../../db/queries/channels";
 
 /**
  * Accepts an invitation in one transaction: creates the account (or uses the
@@ -42,6 +42,18 @@ export async function consumePasswordReset({ tokenHash, passwordHash }: { tokenH
     await spendAllResetTokens(tx, row.userId);
     await setPasswordAndEndSessions(tx, row.userId, passwordHash);
     return row.userId;
+  });
+}
+
+/** Takes someone out of the channel (their records stay); the last owner cannot be removed. Their open live streams end on the next event. */
+export async function removeMember({ channelId, userId }: { channelId: string; userId: string }) {
+  return db().transaction(async (tx) => {
+    const rows = await lockMemberships(tx, channelId);
+    const target = rows.find((r) => r.userId === userId);
+    if (!target) return { ok: false as const, reason: "not_found" as const };
+    if (target.roles.includes("owner") && rows.filter((r) => r.roles.includes("owner")).length === 1) return { ok: false as const, reason: "last_owner" as const };
+    await deleteMembership(tx, channelId, userId);
+    return { ok: true as const };
   });
 }
 
