@@ -1,3 +1,5 @@
+import { withSerwist } from "@serwist/turbopack";
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   reactStrictMode: true,
@@ -6,4 +8,5 @@ const nextConfig = {
   serverExternalPackages: ["pg", "s3rver", "smtp-server", "mailparser", "bcryptjs", "mediainfo.js"],
   outputFileTracingExcludes: { "*": [".data/**", ".test-data/**"] },
 };
-export default nextConfig;
+// The service worker (app/sw.ts) is bundled by Serwist and served from /serwist/sw.js.
+export default withSerwist(nextConfig);

@@ -31,6 +31,9 @@ export function AppHeader({
           <Link className={link} href={`/c/${channelId}/overview`}>
             At a glance
           </Link>
+          <Link className={link} href={`/c/${channelId}/workshop`}>
+            Workshop
+          </Link>
           <Link className={link} href={`/c/${channelId}/shoot-days`}>
             Shoot days
           </Link>

@@ -58,7 +58,7 @@ for (const w of WIDTHS) {
     if (clips[0]) pages.push(["clip", `${e}/footage/${clips[0].id}`]);
     const table = episodes.find((x) => x.title.startsWith("Walnut side table"))!;
     const days = (await (await page.request.get(`/api/channels/${channelId}/shoot-days?from=2026-12-12&to=2026-12-12`)).json()).shootDays as { id: string }[];
-    pages.push(["shoot-days", `${c}/shoot-days`], ["schedule", `${c}/episodes/${table.id}/schedule`], ["sponsors", `${c}/sponsors`], ["sponsor-checks", `${c}/episodes/${table.id}/sponsors`], ["publish", `${c}/episodes/${table.id}/publish`], ["overview", `${c}/overview`]);
+    pages.push(["shoot-days", `${c}/shoot-days`], ["schedule", `${c}/episodes/${table.id}/schedule`], ["sponsors", `${c}/sponsors`], ["sponsor-checks", `${c}/episodes/${table.id}/sponsors`], ["publish", `${c}/episodes/${table.id}/publish`], ["overview", `${c}/overview`], ["workshop", `${c}/workshop/${table.id}`]);
     if (days[0]) pages.push(["call-sheet", `${c}/shoot-days/${days[0].id}/call-sheet`]);
     for (const [name, url] of pages) {
       await page.goto(url);

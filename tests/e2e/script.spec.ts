@@ -35,28 +35,38 @@ test("presenter writes a timed script, pins a timecode, resolves a two-window co
   await expect(page.getByTestId("runtime-vs-target")).toContainText("under the target");
   await shot(page, "script-editor");
 
-  // Two windows on the same segment.
-  const other = await context.newPage();
-  await other.goto(url);
-  await expect(other.getByTestId("segment")).toHaveCount(2);
+  // Two windows on the same segment: with live updates, the second shows the first's words without a reload.
+  const watching = await context.newPage();
+  await watching.goto(url);
+  await expect(watching.getByTestId("segment")).toHaveCount(2);
+  await expect(watching.getByTestId("live-state")).toHaveAttribute("data-state", "live");
   const mine = first.getByRole("textbox", { name: "Segment 1 text" });
   await mine.fill("Intro from window one.");
   await expect(page.getByTestId("script-save-state")).toHaveText("All changes saved");
+  await expect(watching.getByTestId("segment").nth(0).getByRole("textbox", { name: "Segment 1 text" })).toHaveValue("Intro from window one.");
+  await watching.close();
 
+  // A window that has not heard of the change (its live stream cut) and types over it gets both texts and a merge.
+  const other = await context.newPage();
+  await other.route(/\/api\/channels\/[^/]+\/live/, (r) => r.fulfill({ status: 204, body: "" }));
+  await other.goto(url);
+  await expect(other.getByTestId("segment")).toHaveCount(2);
+  await mine.fill("Intro again from window one.");
+  await expect(page.getByTestId("script-save-state")).toHaveText("All changes saved");
   const theirs = other.getByTestId("segment").nth(0).getByRole("textbox", { name: "Segment 1 text" });
   await theirs.fill("Intro from window two.");
   const conflict = other.getByTestId("conflict");
   await expect(conflict).toBeVisible();
   await expect(conflict.getByTestId("conflict-mine")).toHaveText("Intro from window two.");
-  await expect(conflict.getByTestId("conflict-theirs")).toHaveText("Intro from window one.");
+  await expect(conflict.getByTestId("conflict-theirs")).toHaveText("Intro again from window one.");
   await shot(other, "script-conflict");
   await conflict.getByRole("button", { name: "Save merged text" }).click();
   await expect(other.getByTestId("script-save-state")).toHaveText("All changes saved");
 
   await page.reload();
   const merged = await page.getByTestId("segment").nth(0).getByRole("textbox", { name: "Segment 1 text" }).inputValue();
-  expect(merged).toContain("window one");
-  expect(merged).toContain("window two");
+  // Three-way merge from the text both started from ("Intro from window one."): one added "again", the other changed "one" to "two".
+  expect(merged).toBe("Intro again from window two.");
   await other.close();
 
   await page.getByRole("link", { name: "Read-through" }).click();

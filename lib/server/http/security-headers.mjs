@@ -20,6 +20,8 @@ export function contentSecurityPolicy({ nonce, storageOrigin, dev }) {
     `img-src 'self' blob: data:${store}`,
     `media-src 'self' blob:${store}`,
     `connect-src 'self'${store}${dev ? " ws:" : ""}`,
+    "worker-src 'self'",
+    "manifest-src 'self'",
     "font-src 'self'",
     "object-src 'none'",
     "base-uri 'self'",
