@@ -74,7 +74,29 @@ export function toResponse(e: unknown): Response {
   if (pgCode === "22P05" || pgCode === "22021") {
     return Response.json({ error: { code: "validation:text", message: "The text contains a character that cannot be stored (such as NUL). Remove it and try again." } }, { status: 400 });
   }
+  // The database is down or restarting: say so (503, try again), never a 500. Nothing was committed: a failed transaction rolls back.
+  if (databaseUnavailable(e)) {
+    return Response.json({ error: { code: "unavailable:database", message: "The database is not answering just now, so nothing was saved. Try again in a moment." } }, { status: 503, headers: { "retry-after": "5" } });
+  }
   // Database and other unexpected errors are logged, never returned.
   console.error("[api] unexpected error", e);
   return Response.json({ error: { code: "internal", message: "Something went wrong on our side. Try again." } }, { status: 500 });
+}
+
+/**
+ * A connection that could not be made or was cut: the socket errors Node
+ * gives, and PostgreSQL's class 08 (connection exception) and 57P0x
+ * (operator intervention: admin_shutdown, crash_shutdown, cannot_connect_now),
+ * from PostgreSQL's documentation, Appendix A "Error Codes".
+ */
+export function databaseUnavailable(e: unknown): boolean {
+  const seen = new Set<unknown>();
+  for (let x: unknown = e; x && typeof x === "object" && !seen.has(x); x = (x as { cause?: unknown }).cause) {
+    seen.add(x);
+    const code = String((x as { code?: unknown }).code ?? "");
+    if (["ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "57P01", "57P02", "57P03"].includes(code) || code.startsWith("08")) return true;
+    const msg = String((x as { message?: unknown }).message ?? "");
+    if (/Connection terminated|connection timeout|timeout exceeded when trying to connect|Client has encountered a connection error/i.test(msg)) return true;
+  }
+  return false;
 }
