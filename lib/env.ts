@@ -24,6 +24,8 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(3).default("Jigboard <no-reply@jigboard.example>"),
   NEXTAUTH_URL: z.url().default("http://127.0.0.1:3000"),
   NEXTAUTH_SECRET: z.string().min(32, "NEXTAUTH_SECRET must be at least 32 characters"),
+  /** First wait before a failed job (a mail the server refused) is tried again; it doubles each time. */
+  JOB_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(20),
   /** Signs channel exports; installations that share it can import each other's exports (defaults to one derived from NEXTAUTH_SECRET). */
   EXPORT_SIGNING_SECRET: z.string().min(32, "EXPORT_SIGNING_SECRET must be at least 32 characters").optional(),
   /** The dev-only mailbox page that shows what the local SMTP fake received. */

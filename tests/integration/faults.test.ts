@@ -12,17 +12,22 @@ import os from "node:os";
 import path from "node:path";
 import pg from "pg";
 import { startLocalPostgres } from "@/lib/server/local/postgres";
+import { startLocalSmtp } from "@/lib/server/local/smtp";
 import { runMigrations } from "@/db/migrate";
 import { cookieFor } from "../support/fixtures";
 
 const PORT = 3109;
 const PG_PORT = 54369;
+const SMTP_PORT = 54367;
 const base = `http://127.0.0.1:${PORT}`;
 const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "jigboard-fault-pg-"));
 let pgc: Awaited<ReturnType<typeof startLocalPostgres>>;
 let app: ChildProcess;
+let worker: ChildProcess | undefined;
+let smtp: Awaited<ReturnType<typeof startLocalSmtp>> | undefined;
 let cookie = "";
 let channelId = "";
+let userId = "";
 
 async function until(fn: () => Promise<boolean>, ms: number) {
   const end = Date.now() + ms;
@@ -54,10 +59,11 @@ beforeAll(async () => {
   const user = (await c.query("insert into users (email, name, password_hash) values ('fault@test.example', 'Fault', 'x') returning id")).rows[0].id as string;
   channelId = (await c.query("insert into channels (name) values ('Fault channel') returning id")).rows[0].id as string;
   await c.query("insert into memberships (channel_id, user_id, roles) values ($1, $2, '{owner}')", [channelId, user]);
+  userId = user;
   await c.end();
   cookie = await cookieFor(user);
   app = spawn(process.execPath, [path.join(process.cwd(), "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(PORT)], {
-    env: { ...process.env, DATABASE_URL: pgc.url, NODE_ENV: "production", NEXTAUTH_URL: base },
+    env: { ...process.env, DATABASE_URL: pgc.url, NODE_ENV: "production", NEXTAUTH_URL: base, SMTP_URL: `smtp://127.0.0.1:${SMTP_PORT}` },
     stdio: "ignore",
   });
   expect(await until(async () => (await fetch(`${base}/api/health`)).ok, 60_000)).toBe(true);
@@ -65,6 +71,8 @@ beforeAll(async () => {
 
 afterAll(async () => {
   app?.kill("SIGTERM");
+  worker?.kill("SIGTERM");
+  await smtp?.stop();
   await pgc?.stop();
   fs.rmSync(dataDir, { recursive: true, force: true });
 });
@@ -87,5 +95,41 @@ describe("database restarted during a run", () => {
     expect(await until(async () => (await createEpisode("After the restart")).status === 201, 30_000)).toBe(true);
     const titles = await count();
     expect(titles).toBe(2);
+  }, 120_000);
+});
+
+async function query<T = Record<string, unknown>>(sql: string, params: unknown[] = []): Promise<T[]> {
+  const c = new pg.Client({ connectionString: pgc.url });
+  await c.connect();
+  try {
+    return (await c.query(sql, params)).rows as T[];
+  } finally {
+    await c.end();
+  }
+}
+
+describe("mail server down", () => {
+  it("a call sheet stays queued while the mail server is down and is delivered exactly once when it returns", async () => {
+    const [day] = await query<{ id: string }>("insert into shoot_days (channel_id, day, call_at, wrap_at) values ($1, '2027-01-09', '2027-01-09T09:00:00Z', '2027-01-09T17:00:00Z') returning id", [channelId]);
+    await query("insert into shoot_day_crew (shoot_day_id, user_id, duty) values ($1, $2, 'camera')", [day!.id, userId]);
+    // The worker, with the mail server not there yet; a failed send is tried again after 1 s, then 2, 4…
+    worker = spawn(process.execPath, [path.join(process.cwd(), "node_modules", "tsx", "dist", "cli.mjs"), "--conditions=react-server", path.join(process.cwd(), "lib", "server", "jobs", "worker.ts")], {
+      env: { ...process.env, DATABASE_URL: pgc.url, SMTP_URL: `smtp://127.0.0.1:${SMTP_PORT}`, JOB_POLL_SECONDS: "0.5", JOB_RETRY_DELAY_SECONDS: "1" },
+      stdio: "ignore",
+    });
+    const sent = await fetch(`${base}/api/shoot-days/${day!.id}/call-sheet`, { method: "POST", headers: { cookie, origin: base, "content-type": "application/json" }, body: JSON.stringify({ message: "Bring ear defenders." }) });
+    expect(sent.status).toBe(202);
+    const sendId = ((await sent.json()) as { send: { id: string } }).send.id;
+    // Tried and refused: still queued, with the reason, and nothing delivered.
+    expect(await until(async () => ((await query<{ error: string | null }>("select error from call_sheet_sends where id = $1", [sendId]))[0]?.error ?? "").startsWith("not sent yet"), 30_000)).toBe(true);
+    expect((await query<{ status: string }>("select status from call_sheet_sends where id = $1", [sendId]))[0]!.status).toBe("queued");
+    expect(await query("select 1 from mail_messages")).toHaveLength(0);
+
+    smtp = await startLocalSmtp({ port: SMTP_PORT, databaseUrl: pgc.url });
+    expect(await until(async () => (await query<{ status: string }>("select status from call_sheet_sends where id = $1", [sendId]))[0]!.status === "sent", 60_000)).toBe(true);
+    expect(await until(async () => (await query("select 1 from mail_messages where kind = 'call_sheet'")).length === 1, 10_000)).toBe(true);
+    // Never twice: later retries do not send it again.
+    await new Promise((r) => setTimeout(r, 3000));
+    expect(await query("select 1 from mail_messages where kind = 'call_sheet'")).toHaveLength(1);
   }, 120_000);
 });

@@ -11,8 +11,9 @@ import PgBoss from "pg-boss";
 import { env } from "../../env";
 
 export const CALL_SHEET_QUEUE = "call-sheet";
-/** Retries for a mail that could not be sent: 10 tries, from 20 s doubling (common practice, no published source). */
+/** Retries for a mail that could not be sent: 10 tries, from 20 s doubling (common practice, no published source; JOB_RETRY_DELAY_SECONDS sets the first delay). */
 export const CALL_SHEET_RETRY = { retryLimit: 10, retryDelay: 20, retryBackoff: true } as const;
+const retry = () => ({ ...CALL_SHEET_RETRY, retryDelay: env().JOB_RETRY_DELAY_SECONDS });
 
 const g = globalThis as unknown as { __jigboardBoss?: Promise<PgBoss> };
 
@@ -22,7 +23,7 @@ export function queue(opts: { worker?: boolean } = {}): Promise<PgBoss> {
       const boss = new PgBoss({ connectionString: env().DATABASE_URL, schema: "pgboss", max: 3, application_name: "jigboard-jobs", supervise: Boolean(opts.worker), schedule: false });
       boss.on("error", (e) => console.error("[jobs]", e.message));
       await boss.start();
-      await boss.createQueue(CALL_SHEET_QUEUE, { name: CALL_SHEET_QUEUE, ...CALL_SHEET_RETRY });
+      await boss.createQueue(CALL_SHEET_QUEUE, { name: CALL_SHEET_QUEUE, ...retry() });
       return boss;
     })().catch((e) => {
       g.__jigboardBoss = undefined;
@@ -33,7 +34,7 @@ export function queue(opts: { worker?: boolean } = {}): Promise<PgBoss> {
 }
 
 export async function enqueueCallSheet(sendId: string): Promise<string | null> {
-  return (await queue()).send(CALL_SHEET_QUEUE, { sendId }, { ...CALL_SHEET_RETRY });
+  return (await queue()).send(CALL_SHEET_QUEUE, { sendId }, retry());
 }
 
 export async function stopQueue(): Promise<void> {
