@@ -62,12 +62,17 @@ beforeAll(async () => {
   userId = user;
   await c.end();
   cookie = await cookieFor(user);
+  await startApp();
+}, 120_000);
+
+/** The app server as a process of its own, on this test's database, the shared storage and this test's mail port. */
+async function startApp() {
   app = spawn(process.execPath, [path.join(process.cwd(), "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(PORT)], {
-    env: { ...process.env, DATABASE_URL: pgc.url, NODE_ENV: "production", NEXTAUTH_URL: base, SMTP_URL: `smtp://127.0.0.1:${SMTP_PORT}` },
+    env: { ...process.env, DATABASE_URL: pgc.url, NODE_ENV: "production", NEXTAUTH_URL: base, SMTP_URL: `smtp://127.0.0.1:${SMTP_PORT}`, UPLOAD_PART_BYTES: String(5 * 1024 * 1024) },
     stdio: "ignore",
   });
-  expect(await until(async () => (await fetch(`${base}/api/health`)).ok, 60_000)).toBe(true);
-}, 120_000);
+  expect(await until(async () => (await fetch(`${base}/api/health`, { signal: AbortSignal.timeout(2000) })).status !== 0, 60_000)).toBe(true);
+}
 
 afterAll(async () => {
   app?.kill("SIGTERM");
@@ -131,5 +136,43 @@ describe("mail server down", () => {
     // Never twice: later retries do not send it again.
     await new Promise((r) => setTimeout(r, 3000));
     expect(await query("select 1 from mail_messages where kind = 'call_sheet'")).toHaveLength(1);
+  }, 120_000);
+});
+
+describe("app server killed during an upload", () => {
+  it("a new server process lists the parts already stored, and the upload finishes from there", async () => {
+    const api = async (url: string, method = "GET", body?: unknown) => {
+      const r = await fetch(`${base}${url}`, { method, headers: { cookie, origin: base, "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+      return { status: r.status, json: (await r.json()) as any };
+    };
+    const [ep] = await query<{ id: string }>("insert into episodes (channel_id, title, stage, position) values ($1, 'Upload under fire', 'editing', 0) returning id", [channelId]);
+    const size = 12 * 1024 * 1024;
+    const started = await api(`/api/episodes/${ep!.id}/uploads`, "POST", { fileName: "A003_C002.mp4", size, contentType: "video/mp4" });
+    expect(started.status).toBe(201);
+    const clipId = started.json.clip.id as string;
+    const partSize = started.json.partSize as number;
+    const count = started.json.partCount as number;
+    expect(count).toBe(3);
+    const bytes = Buffer.alloc(size, 7);
+    const put = async (n: number) => {
+      const { json } = await api(`/api/clips/${clipId}/parts`, "POST", { partNumbers: [n] });
+      const body = bytes.subarray((n - 1) * partSize, Math.min(size, n * partSize));
+      const r = await fetch(json.urls[0].url, { method: "PUT", body: new Blob([body as Uint8Array<ArrayBuffer>]) });
+      expect(r.ok).toBe(true);
+    };
+    await put(1);
+    await put(2);
+    // The server dies mid-upload; the parts are in storage, not in the server.
+    app.kill("SIGKILL");
+    await new Promise((r) => app.once("exit", r));
+    expect(await fetch(`${base}/api/health`).then(() => "up", () => "down")).toBe("down");
+    await startApp();
+    const stored = await api(`/api/clips/${clipId}/parts`);
+    expect(stored.status).toBe(200);
+    expect(stored.json.parts.map((p: { partNumber: number }) => p.partNumber)).toEqual([1, 2]);
+    await put(3);
+    const done = await api(`/api/clips/${clipId}/complete`, "POST");
+    expect(done.status).toBe(200);
+    expect(done.json.clip.sizeBytes).toBe(size);
   }, 120_000);
 });
