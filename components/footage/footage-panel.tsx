@@ -92,7 +92,7 @@ export function FootagePanel({ episodeId, channelBase, canManage, shots }: { epi
                     </span>
                     <span className="num text-xs text-walnut-700">{u.status === "uploading" && u.speed > 0 ? `${formatBytes(u.speed)}/s · ${clock(u.secondsLeft)} left` : ""}</span>
                     <span className="text-xs" data-testid="upload-status">
-                      {u.status === "done" ? "Done" : u.status === "paused" ? "Paused" : u.status === "error" ? "Stopped" : u.status === "cancelled" ? "Cancelled" : u.status === "finishing" ? "Finishing…" : u.status === "preparing" ? "Preparing…" : "Uploading"}
+                      {u.status === "done" ? "Done" : u.status === "paused" ? "Paused" : u.status === "waiting" ? "Waiting for storage…" : u.status === "error" ? "Stopped" : u.status === "cancelled" ? "Cancelled" : u.status === "finishing" ? "Finishing…" : u.status === "preparing" ? "Preparing…" : "Uploading"}
                       {u.resumed && u.status !== "cancelled" ? " (resumed)" : ""}
                     </span>
                     {u.status === "uploading" ? <Button onClick={() => engine()?.pause()}>Pause</Button> : null}

@@ -8,7 +8,8 @@
  */
 import { send } from "@/components/fetch-json";
 
-export type UploadStatus = "preparing" | "uploading" | "paused" | "finishing" | "done" | "error" | "cancelled";
+/** "waiting": storage is not answering; the upload keeps trying by itself and goes on when it is back. */
+export type UploadStatus = "preparing" | "uploading" | "waiting" | "paused" | "finishing" | "done" | "error" | "cancelled";
 
 export interface UploadState {
   key: string;
@@ -164,7 +165,7 @@ export class Upload {
   }
 
   private async sendPart(n: number) {
-    for (let attempt = 1; attempt <= MAX_TRIES && !this.stopped; attempt++) {
+    for (let attempt = 1; !this.stopped; attempt++) {
       try {
         const url = await this.signed(n);
         const blob = this.file.slice((n - 1) * this.partSize, Math.min(this.file.size, n * this.partSize));
@@ -184,16 +185,21 @@ export class Upload {
         this.inflight.delete(n);
         this.partSent.delete(n);
         this.done.add(n);
+        if (this.state.status === "waiting") this.emit({ status: "uploading", error: null });
         this.progress();
         return;
       } catch (e) {
         this.inflight.delete(n);
         this.partSent.delete(n);
         if ((e as { aborted?: boolean }).aborted || this.stopped) return;
-        if ((e as { status?: number }).status === 403) this.urls.delete(n); // expired signature: sign again
-        if (attempt === MAX_TRIES) throw new Error(`part ${n} failed ${MAX_TRIES} times (${(e as Error).message}); press Resume to try again`);
+        const status = (e as { status?: number }).status;
+        if (status === 403) this.urls.delete(n); // expired signature: sign again
+        // Storage not answering (no reply, or a 5xx): after the usual tries, wait for it, probing, instead of giving up.
+        const unreachable = status === undefined || status >= 500;
+        if (attempt >= MAX_TRIES && !unreachable) throw new Error(`part ${n} failed ${MAX_TRIES} times (${(e as Error).message}); press Resume to try again`);
+        if (attempt >= MAX_TRIES && this.state.status !== "waiting") this.emit({ status: "waiting", speed: 0, secondsLeft: null, error: "Storage is not answering. The upload waits and goes on by itself when it is back." });
         if (typeof navigator !== "undefined" && !navigator.onLine) await new Promise((r) => window.addEventListener("online", r, { once: true }));
-        await new Promise((r) => setTimeout(r, this.retryBaseMs * 2 ** attempt));
+        await new Promise((r) => setTimeout(r, this.retryBaseMs * 2 ** Math.min(attempt, MAX_TRIES)));
       }
     }
   }

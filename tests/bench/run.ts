@@ -61,3 +61,7 @@ await uploadBench();
 // Channel export and import through the app server, with its own services.
 const { archiveBench } = await import("./archive");
 await archiveBench();
+
+// 50 connections on the board, script and shot list of a generated channel, against a bare route.
+const { loadBench } = await import("./load");
+await loadBench();

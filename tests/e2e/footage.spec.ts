@@ -105,3 +105,26 @@ test("an upload interrupted by a page reload resumes from the parts already stor
   await shot(page, "upload-resumed-after-reload");
   await ctx.close();
 });
+
+test("storage going down in the middle of an upload: the upload waits, says so, and finishes when storage is back", async ({ page }) => {
+  await new SignInPage(page).signIn("editor@jigboard.example");
+  const channelId = page.url().split("/c/")[1]!;
+  const episodes = (await (await page.request.get(`/api/channels/${channelId}/episodes`)).json()).episodes as { id: string; title: string }[];
+  const bench = episodes.find((e) => e.title.startsWith("Outdoor bench"))!;
+  await page.goto(`/c/${channelId}/episodes/${bench.id}/footage`);
+  // Part 1 reaches storage; then storage stops answering (every part upload fails at the connection) until it is "back".
+  await page.route(/\/jigboard-media\/channel\/.*partNumber=/, async (route) => {
+    const part = Number(new URL(route.request().url()).searchParams.get("partNumber"));
+    if (part > 1) return route.abort("connectionrefused");
+    await route.continue().catch(() => {});
+  });
+  const bytes = Buffer.concat([fs.readFileSync("db/demo-media/test-pattern.mp4"), Buffer.alloc(11 * 1024 * 1024, 0)]);
+  await page.getByTestId("footage-input").setInputFiles({ name: "C004_outage.mp4", mimeType: "video/mp4", buffer: bytes });
+  const row = page.getByTestId("upload-row").filter({ hasText: "C004_outage.mp4" });
+  await expect(row.getByTestId("upload-status")).toHaveText("Waiting for storage…", { timeout: 60_000 });
+  await expect(row).toContainText("Storage is not answering. The upload waits and goes on by itself when it is back.");
+  await shot(page, "upload-waiting-for-storage");
+  await page.unroute(/\/jigboard-media\/channel\/.*partNumber=/);
+  await expect(row.getByTestId("upload-status")).toHaveText("Done", { timeout: 90_000 });
+  await expect(row).toContainText("parts 3/3");
+});

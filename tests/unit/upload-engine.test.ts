@@ -11,7 +11,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { CONCURRENCY, MAX_TRIES, Upload, type UploadState } from "@/components/footage/upload-engine";
 
 const PART = 10;
-type Behaviour = (part: number, attempt: number, url: string) => "ok" | "fail" | 403 | "hang";
+type Behaviour = (part: number, attempt: number, url: string) => "ok" | "fail" | 403 | 400 | 503 | "hang";
 
 function world(size: number) {
   const w = {
@@ -68,7 +68,7 @@ function world(size: number) {
         this.done = true;
         w.inFlight--;
         if (b === "fail") return this.onerror?.();
-        this.status = b === 403 ? 403 : 200;
+        this.status = typeof b === "number" ? b : 200;
         if (this.status === 200) {
           this.upload.onprogress?.({ loaded: blob.size });
           w.stored.set(n, blob.size);
@@ -124,13 +124,27 @@ describe("upload engine", () => {
     expect(w.signs).toBe(2); // one batch shared by the four workers, one for the refused signature
   });
 
-  it(`gives up on a part after ${MAX_TRIES} tries and says how to go on`, async () => {
+  it("waits for storage that stops answering, says so, and goes on by itself when it is back", async () => {
     const w = world(20);
-    w.behaviour = (n) => (n === 2 ? "fail" : "ok");
+    // Part 2 meets a dead connection 7 times, then a 503, then storage is back.
+    w.behaviour = (n, attempt) => (n !== 2 ? "ok" : attempt <= 7 ? "fail" : attempt === 8 ? 503 : "ok");
+    const states: UploadState[] = [];
+    const u = new Upload(file(20), "e1", (s) => states.push({ ...s }), null, 1);
+    await u.start();
+    expect(u.state.status).toBe("done");
+    const waiting = states.find((s) => s.status === "waiting");
+    expect(waiting?.error).toBe("Storage is not answering. The upload waits and goes on by itself when it is back.");
+    expect(states.findIndex((s) => s.status === "uploading" && s.error === null && states.indexOf(waiting!) < states.indexOf(s))).toBeGreaterThan(-1);
+    expect(w.attempts.get(2)).toBe(9);
+  });
+
+  it(`gives up on a part storage refuses ${MAX_TRIES} times and says how to go on`, async () => {
+    const w = world(20);
+    w.behaviour = (n) => (n === 2 ? 400 : "ok");
     const u = new Upload(file(20), "e1", () => {}, null, 1);
     await u.start();
     expect(u.state.status).toBe("error");
-    expect(u.state.error).toMatch(/part 2 failed 5 times.*Resume/);
+    expect(u.state.error).toMatch(/part 2 failed 5 times \(storage answered 400\).*Resume/);
     expect(w.attempts.get(2)).toBe(MAX_TRIES);
   });
 
