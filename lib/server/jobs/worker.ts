@@ -5,12 +5,19 @@
  */
 import { CALL_SHEET_QUEUE, queue, stopQueue } from "./queue";
 import { deliverCallSheet } from "./call-sheets";
+import { pruneLiveEvents } from "../../../db/queries/live";
+
+/** Live events are kept a day for reconnects; the worker clears older ones every hour. */
+const PRUNE_EVERY_MS = 3600_000;
 
 export async function startWorkers(opts: { pollingIntervalSeconds?: number } = {}) {
   const boss = await queue({ worker: true });
   await boss.work<{ sendId: string }>(CALL_SHEET_QUEUE, { pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 2, batchSize: 1 }, async (jobs) => {
     for (const job of jobs) await deliverCallSheet(job.data.sendId);
   });
+  const prune = () => void pruneLiveEvents().catch((e) => console.error("[worker] pruning live events:", (e as Error).message));
+  prune();
+  setInterval(prune, PRUNE_EVERY_MS).unref();
   return boss;
 }
 
