@@ -86,8 +86,14 @@ export function WorkshopView(p: Props) {
   async function addNote() {
     const t = text.trim();
     if (!t) return;
-    await enqueue({ id: crypto.randomUUID(), episodeId: p.episodeId, text: t, stepId: step?.id ?? null, notedAt: new Date().toISOString() });
+    // Cleared at once, so the next note can be typed while this one is being kept (clearing later would wipe it).
     setText("");
+    try {
+      await enqueue({ id: crypto.randomUUID(), episodeId: p.episodeId, text: t, stepId: step?.id ?? null, notedAt: new Date().toISOString() });
+    } catch {
+      setText(t);
+      return;
+    }
     await refreshQueue();
     if (navigator.onLine) void sendAll();
   }

@@ -17,9 +17,10 @@ test("notes written at the bench with no signal are kept, then stored exactly on
   await expect(page.getByTestId("connection")).toContainText("No signal");
   const stamp = Date.now().toString(36);
   const texts = [`In hindsight, the string stretched; use a batten (${stamp} 1)`, `Second clamp pad slipped; tape it (${stamp} 2)`, `Re-shoot the glue squeeze-out close (${stamp} 3)`];
-  for (const t of texts) {
+  for (const [i, t] of texts.entries()) {
     await page.getByLabel(/^Note/).fill(t);
     await page.getByRole("button", { name: "Save note" }).click();
+    await expect(page.getByTestId("queue-state")).toHaveAttribute("data-waiting", String(i + 1));
   }
   await expect(page.getByTestId("queue-state")).toHaveAttribute("data-waiting", "3");
   await expect(page.getByTestId("queue-state")).toContainText("3 notes waiting to send");
