@@ -209,11 +209,18 @@ export function remapKey(key: string, ctx: Pick<RemapContext, "oldChannelId" | "
   return key.startsWith(from) ? channelKeyPrefix(ctx.newChannelId) + key.slice(from.length) : `${channelKeyPrefix(ctx.newChannelId)}imported/${key}`;
 }
 
+const sets = new Map<string, { userCols: Set<string>; keyCols: Set<string> }>();
+/** Which columns of a table hold users and storage keys, worked out once per table, not per row. */
+function columnSets(table: string) {
+  let v = sets.get(table);
+  if (!v) sets.set(table, (v = { userCols: new Set(USER_COLUMNS.filter((u) => u.table === table).map((u) => u.column)), keyCols: new Set(KEY_COLUMNS[table] ?? []) }));
+  return v;
+}
+
 /** One exported row as it goes into the new channel; null when it cannot (its user is not here). */
 export function remapRow(table: string, row: Record<string, unknown>, columns: ColumnInfo[], ctx: RemapContext): Record<string, unknown> | null {
   const out: Record<string, unknown> = {};
-  const userCols = new Set(USER_COLUMNS.filter((u) => u.table === table).map((u) => u.column));
-  const keyCols = new Set(KEY_COLUMNS[table] ?? []);
+  const { userCols, keyCols } = columnSets(table);
   for (const c of columns) {
     const v = row[c.name];
     if (v === undefined) continue;
@@ -271,7 +278,6 @@ export async function importChannel({ userId, body, name }: { userId: string; bo
   const namespace = crypto.randomUUID();
   const client = await pool().connect();
   const copied: string[] = [];
-  let ok = false;
   try {
     await client.query("begin");
     await createObjectList(client);
@@ -416,7 +422,6 @@ export async function importChannel({ userId, body, name }: { userId: string; bo
     }
     await closeCursor(client, "jb_objects");
     await client.query("commit");
-    ok = true;
     return { channelId: ctx.newChannelId, namespace, rows: totalRows, objects };
   } catch (e) {
     await client.query("rollback").catch(() => undefined);
@@ -430,6 +435,5 @@ export async function importChannel({ userId, body, name }: { userId: string; bo
     throw e;
   } finally {
     client.release();
-    void ok;
   }
 }

@@ -8,11 +8,20 @@ import type { Episode } from "../../../db/schema";
 import { listPublishOverrides } from "../../../db/queries/publish";
 import { presignGet } from "../../../storage/presign";
 import { checkInputFor, dealReviewFor, scriptFingerprint } from "./sponsors";
-import { coverageFor } from "./coverage";
+import { coverageOf } from "./coverage";
+import { getChannelById } from "../../../db/queries/channels";
+import { listGapsByEpisode } from "../../../db/queries/coverage";
 
 /** Everything the checklist reads, computed fresh. */
 export async function publishViewFor(episode: Episode): Promise<PublishDto> {
-  const [{ input, view, parts, pkg, shots, deals }, { coverage }, overrides] = await Promise.all([checkInputFor(episode), coverageFor(episode), listPublishOverrides({ episodeId: episode.id })]);
+  const [{ input, view, parts, pkg, shots, deals, ranges }, channel, stored, overrides] = await Promise.all([
+    checkInputFor(episode),
+    getChannelById({ id: episode.channelId }),
+    listGapsByEpisode({ episodeId: episode.id }),
+    listPublishOverrides({ episodeId: episode.id }),
+  ]);
+  // Coverage from the script view and ranges the checks already read.
+  const coverage = coverageOf(episode, channel!, view, ranges, stored, new Map(shots.filter((s) => s.gapId).map((s) => [s.gapId!, s.id])));
   const report = runChecks(input);
   const live = deals.filter((d) => d.status !== "cancelled");
   const reviews = await Promise.all(live.map(async (d) => ({ deal: d, review: await dealReviewFor(d) })));

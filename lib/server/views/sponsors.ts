@@ -146,7 +146,7 @@ export async function checkInputFor(episode: Episode, shelf?: Awaited<ReturnType
     sections: pkg.sections,
   };
   input.description = composeDescription(parts);
-  return { input, view, parts, pkg, shots, deals };
+  return { input, view, parts, pkg, shots, deals, ranges };
 }
 
 export async function sponsorChecksFor(episode: Episode, shelf?: Awaited<ReturnType<typeof channelShelf>>): Promise<SponsorChecksDto> {
