@@ -7,6 +7,7 @@
  * segment begins, and the engine reports the drift between the running
  * estimate and the pin instead of hiding it.
  */
+import { LRUCache } from "lru-cache";
 import { msToFrames, type Rate } from "./timecode";
 import { pausesMs, readableChars, spokenWordCount } from "./spoken-words";
 
@@ -61,27 +62,60 @@ export interface ScriptTiming {
   overFrames: number | null;
 }
 
-export function segmentDurationFrames(s: TimingSegment, rate: Rate, wpm = DEFAULT_WPM): { frames: number; words: number; source: TimedSegment["source"] } {
-  const words = s.kind === "on_screen_text" ? 0 : spokenWordCount(s.text);
+/** What timing needs of a text whatever the rate: spoken words, pause time and on-screen characters. */
+export interface TextMeasure {
+  words: number;
+  pausesMs: number;
+  chars: number;
+}
+
+export function measureText(text: string): TextMeasure {
+  return { words: spokenWordCount(text), pausesMs: pausesMs(text), chars: readableChars(text) };
+}
+
+/**
+ * Measures of texts already seen, so a retime after one keystroke counts the
+ * words of the one segment that changed and looks the others up. Bounded by
+ * total text length (about 8 million characters), least recently used first
+ * out; a cache of a pure function, so dropping it changes nothing but speed.
+ */
+export class TextMeasures {
+  private cache = new LRUCache<string, TextMeasure>({ maxSize: 8_000_000, sizeCalculation: (_v, k) => Math.max(1, k.length) });
+  of(text: string): TextMeasure {
+    let m = this.cache.get(text);
+    if (!m) this.cache.set(text, (m = measureText(text)));
+    return m;
+  }
+  has(text: string): boolean {
+    return this.cache.has(text);
+  }
+}
+
+/** The measures timeScript uses unless given its own. */
+export const sharedTextMeasures = new TextMeasures();
+
+export function segmentDurationFrames(s: TimingSegment, rate: Rate, wpm = DEFAULT_WPM, measures: Pick<TextMeasures, "of"> = sharedTextMeasures): { frames: number; words: number; source: TimedSegment["source"] } {
+  const m = measures.of(s.text);
+  const words = s.kind === "on_screen_text" ? 0 : m.words;
   if (s.explicitDurationFrames != null) return { frames: s.explicitDurationFrames, words, source: "explicit" };
   if (s.kind === "on_screen_text") {
-    const chars = readableChars(s.text);
-    const ms = chars ? Math.max(MIN_ON_SCREEN_MS, (chars * 1000) / CAPTION_CPS) : 0;
-    return { frames: msToFrames(ms + pausesMs(s.text), rate), words, source: "caption" };
+    const ms = m.chars ? Math.max(MIN_ON_SCREEN_MS, (m.chars * 1000) / CAPTION_CPS) : 0;
+    return { frames: msToFrames(ms + m.pausesMs, rate), words, source: "caption" };
   }
   // words / wpm minutes, in whole milliseconds, then to frames; integers all the way.
   const readingMs = Math.round((words * 60_000) / wpm);
-  return { frames: msToFrames(readingMs + pausesMs(s.text), rate), words, source: "reading" };
+  return { frames: msToFrames(readingMs + m.pausesMs, rate), words, source: "reading" };
 }
 
-export function timeScript(segments: TimingSegment[], rate: Rate, opts: { wpm?: number; targetSeconds?: number | null } = {}): ScriptTiming {
+export function timeScript(segments: TimingSegment[], rate: Rate, opts: { wpm?: number; targetSeconds?: number | null; measures?: Pick<TextMeasures, "of"> } = {}): ScriptTiming {
   const wpm = opts.wpm ?? DEFAULT_WPM;
+  const measures = opts.measures ?? sharedTextMeasures;
   const out: TimedSegment[] = [];
   const byKind = { to_camera: 0, voice_over: 0, sponsor_read: 0, on_screen_text: 0 } as Record<SegmentKind, number>;
   const byStep: Record<string, number> = {};
   let cursor = 0;
   for (const s of segments) {
-    const { frames, words, source } = segmentDurationFrames(s, rate, wpm);
+    const { frames, words, source } = segmentDurationFrames(s, rate, wpm, measures);
     const estimatedStart = cursor;
     const start = s.pinnedStartFrame ?? cursor;
     const drift = s.pinnedStartFrame != null ? estimatedStart - s.pinnedStartFrame : null;
@@ -91,7 +125,8 @@ export function timeScript(segments: TimingSegment[], rate: Rate, opts: { wpm?: 
     if (s.stepId) byStep[s.stepId] = (byStep[s.stepId] ?? 0) + frames;
     cursor = end;
   }
-  const totalFrames = out.length ? Math.max(...out.map((s) => s.end)) : 0;
+  let totalFrames = 0;
+  for (const s of out) if (s.end > totalFrames) totalFrames = s.end;
   const targetFrames = opts.targetSeconds != null ? msToFrames(opts.targetSeconds * 1000, rate) : null;
   return { segments: out, totalFrames, byKind, byStep, targetFrames, overFrames: targetFrames != null ? totalFrames - targetFrames : null };
 }

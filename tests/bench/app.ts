@@ -36,7 +36,7 @@ export async function startBenchApp(opts: { name: string; port: number; basePort
   const env = { ...process.env, ...services.env, NEXTAUTH_SECRET: secret, NEXTAUTH_URL: `http://127.0.0.1:${opts.port}`, NODE_ENV: "production" as const, NEXT_TELEMETRY_DISABLED: "1", ...opts.env };
   const nextBin = path.join(root, "node_modules", "next", "dist", "bin", "next");
   if (buildIsStale(root)) spawnSync(process.execPath, [nextBin, "build"], { stdio: "inherit", env });
-  const app: ChildProcess = spawn(process.execPath, [path.join(root, "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(opts.port)], { env, stdio: "ignore" });
+  const app: ChildProcess = spawn(process.execPath, [...(process.env.BENCH_APP_PROFILE ? ["--cpu-prof", `--cpu-prof-dir=${process.env.BENCH_APP_PROFILE}`] : []), path.join(root, "lib", "server", "http", "serve.mjs"), "127.0.0.1", String(opts.port)], { env, stdio: "ignore" });
   for (let i = 0; i < 200; i++) {
     if (await fetch(`http://127.0.0.1:${opts.port}/api/health`).then((r) => r.ok).catch(() => false)) break;
     await new Promise((r) => setTimeout(r, 250));

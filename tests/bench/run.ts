@@ -6,7 +6,8 @@
 // @ts-expect-error untyped package
 import Timecode from "smpte-timecode";
 import { formatTimecode, parseTimecode, rateOf } from "../../lib/timecode";
-import { timeScript, type TimingSegment } from "../../lib/script-timing";
+import { measureText, TextMeasures, timeScript, type TimingSegment } from "../../lib/script-timing";
+import { buildChapters } from "../../lib/chapters";
 import { bestOf } from "./timing";
 
 const best = bestOf;
@@ -49,6 +50,29 @@ const refRetime = best(() => {
   for (const s of t.segments) sink += Timecode(s.start, [30000, 1001], true).toString().length + Timecode(s.end, [30000, 1001], true).toString().length;
 });
 console.log(JSON.stringify({ bench: "retime 2,000 segments with timecodes", oursMs: +oursRetime.toFixed(2), withReferenceFormattingMs: +refRetime.toFixed(2), ratio: +(oursRetime / refRetime).toFixed(3) }));
+
+// Per keystroke in the script editor: one segment's text grows by a letter and
+// the whole script is retimed (with chapters), as the editor does on every
+// change. The texts seen before are looked up; the full retime measures every
+// text afresh. Goal: under 4 ms per keystroke.
+const withChapters = (segs: TimingSegment[], measures: Pick<TextMeasures, "of">) => {
+  const t = timeScript(segs, rate, { wpm: 150, measures });
+  const ch = buildChapters(segs.flatMap((s, i) => (i % 200 === 0 ? [{ segmentId: s.id, title: `Part ${i}`, startFrame: t.segments[i]!.start }] : [])), t.totalFrames, rate);
+  sink += t.totalFrames + ch.length;
+};
+const fullRetime = best(() => withChapters(segments, { of: measureText }), 5);
+const memo = new TextMeasures();
+withChapters(segments, memo);
+const KEYS = 200;
+const typed = segments.slice();
+const keystrokes = best(() => {
+  for (let k = 0; k < KEYS; k++) {
+    const i = 1000;
+    typed[i] = { ...typed[i]!, text: `${segments[i]!.text} ${"w".repeat(1 + (k % 7))}${k}` };
+    withChapters(typed, memo);
+  }
+}, 3) / KEYS;
+console.log(JSON.stringify({ bench: "retime 2,000 segments per keystroke (one text changed)", perKeystrokeMs: +keystrokes.toFixed(3), fullRetimeMs: +fullRetime.toFixed(2), ratio: +(keystrokes / fullRetime).toFixed(3), goal: "under 4 ms per keystroke" }));
 if (sink === 42) console.log("");
 
 const { scheduleBench } = await import("./schedule");

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { cardinalWords, pausesMs, spokenWordCount, tokenWords } from "@/lib/spoken-words";
-import { segmentDurationFrames, timeScript, type TimingSegment } from "@/lib/script-timing";
+import { measureText, segmentDurationFrames, TextMeasures, timeScript, type TimingSegment } from "@/lib/script-timing";
 import { rateOf } from "@/lib/timecode";
 import { buildChapters } from "@/lib/chapters";
 
@@ -143,5 +143,40 @@ describe("chapters (platform rule: first at 0:00, at least three, ascending, eac
   it("uses hours past the hour", () => {
     const r = buildChapters([ch("Intro", 0), ch("Milling", 60), ch("Long glue-up", 3725)], 4000 * 25, rate);
     expect(r.text.split("\n")[2]).toBe("1:02:05 Long glue-up");
+  });
+});
+
+describe("retiming with remembered text measures", () => {
+  const kinds = ["to_camera", "voice_over", "sponsor_read", "on_screen_text"] as const;
+  const segment = fc.record({
+    text: fc.stringMatching(/^[a-z0-9 /{}.sm%x-]{0,60}$/),
+    kind: fc.constantFrom(...kinds),
+    pinned: fc.option(fc.nat(20_000), { nil: null }),
+  });
+
+  // The memo is a cache of a pure function: with it or without it, every figure is the same.
+  it("gives exactly the timing of measuring every text afresh, through any sequence of edits", () => {
+    fc.assert(
+      fc.property(fc.array(segment, { minLength: 1, maxLength: 25 }), fc.array(fc.tuple(fc.nat(), fc.stringMatching(/^[a-z0-9 {}.s]{0,12}$/)), { maxLength: 15 }), (rows, edits) => {
+        const memo = new TextMeasures();
+        let segs: TimingSegment[] = rows.map((r, i) => ({ id: String(i), kind: r.kind, text: r.text, pinnedStartFrame: r.pinned }));
+        for (const [at, typed] of edits) {
+          const i = at % segs.length;
+          segs = segs.map((s, j) => (j === i ? { ...s, text: s.text + typed } : s));
+          expect(timeScript(segs, r2997, { wpm: 163, measures: memo })).toEqual(timeScript(segs, r2997, { wpm: 163, measures: { of: measureText } }));
+        }
+      }),
+    );
+  });
+
+  it("measures only the text that changed", () => {
+    const measured: string[] = [];
+    const memo = new TextMeasures();
+    const counting = { of: (t: string) => (memo.has(t) || measured.push(t), memo.of(t)) };
+    const segs: TimingSegment[] = Array.from({ length: 50 }, (_, i) => ({ id: String(i), kind: "voice_over", text: `step ${i} glue and clamp` }));
+    timeScript(segs, r25, { measures: counting });
+    expect(measured).toHaveLength(50);
+    timeScript(segs.map((s, i) => (i === 7 ? { ...s, text: `${s.text} overnight` } : s)), r25, { measures: counting });
+    expect(measured.slice(50)).toEqual(["step 7 glue and clamp overnight"]);
   });
 });
