@@ -823,3 +823,35 @@ export type Deliverable = typeof deliverables.$inferSelect;
 export type GuestLink = typeof guestLinks.$inferSelect;
 export type PublishPackage = typeof publishPackages.$inferSelect;
 export type ShootLogNote = typeof shootLogNotes.$inferSelect;
+
+/**
+ * Each episode's board figures (script runtime, open gaps), kept until what
+ * they were computed from changes. Triggers raise `rev` whenever a segment,
+ * coverage range, gap or shot of the episode, its rate, target or presenter,
+ * the presenter's reading rate or the channel's gap thresholds change; the
+ * stored figures count only while `computed_rev` equals `rev`. The script and
+ * shot-list responses are cached under the same `rev`. A cache: dropping
+ * every row changes nothing but the time of the next read.
+ */
+export const episodeFigures = pgTable("episode_figures", {
+  episodeId: uuid("episode_id")
+    .primaryKey()
+    .references(() => episodes.id, { onDelete: "cascade" }),
+  rev: bigint("rev", { mode: "number" }).notNull().default(1),
+  computedRev: bigint("computed_rev", { mode: "number" }),
+  scriptSeconds: integer("script_seconds"),
+  openGaps: integer("open_gaps"),
+});
+export type EpisodeFigures = typeof episodeFigures.$inferSelect;
+
+/**
+ * Each channel's revision of its board, raised by triggers whenever an
+ * episode of the channel is added, changed or removed, or its figures'
+ * inputs change (see episode_figures). The board response is cached under it.
+ */
+export const channelRevs = pgTable("channel_revs", {
+  channelId: uuid("channel_id")
+    .primaryKey()
+    .references(() => channels.id, { onDelete: "cascade" }),
+  rev: bigint("rev", { mode: "number" }).notNull().default(1),
+});

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, gte, isNotNull, isNull, lt, ne, sql } from "drizzle-orm";
+import { and, asc, eq, gte, inArray, isNotNull, isNull, lt, ne, sql } from "drizzle-orm";
 import { db, type Q, type Tx } from "../client";
 import { channels, episodes } from "../schema";
 import type { Stage } from "../../lib/stages";
@@ -37,6 +37,11 @@ export async function getEpisodeById({ id }: { id: string }) {
 }
 
 /** Serialises every board write in a channel: positions stay dense and unique per stage. */
+export async function listEpisodesByIds({ ids }: { ids: string[] }) {
+  if (!ids.length) return [];
+  return db().select().from(episodes).where(inArray(episodes.id, ids));
+}
+
 export async function lockChannel(tx: Tx, channelId: string) {
   await tx.select({ id: channels.id }).from(channels).where(eq(channels.id, channelId)).for("update");
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db, type Tx } from "../client";
 import { buildSteps, episodes, gaps, scriptSegments, shots } from "../schema";
 import type { ShotStatus } from "../../lib/schemas/footage";
@@ -86,17 +86,14 @@ export async function insertGapRow(tx: Tx, values: typeof gaps.$inferInsert) {
   return row!;
 }
 
-/** Shots captured or better, and all shots not rejected, per episode. */
-export async function countShotsByEpisodes({ episodeIds }: { episodeIds: string[] }) {
+/** Shots captured or better, and all shots not rejected, per episode of a channel. */
+export async function countShotsByChannel({ channelId }: { channelId: string }) {
   const out = new Map<string, { done: number; total: number }>();
-  if (!episodeIds.length) return out;
-  const rows = await db().select({ episodeId: shots.episodeId, status: shots.status }).from(shots).where(inArray(shots.episodeId, episodeIds));
-  for (const r of rows) {
-    if (r.status === "rejected") continue;
-    const c = out.get(r.episodeId) ?? { done: 0, total: 0 };
-    c.total += 1;
-    if (r.status === "captured" || r.status === "selected") c.done += 1;
-    out.set(r.episodeId, c);
-  }
+  const r = await db().execute(sql`
+    select s.episode_id, count(*) filter (where s.status in ('captured', 'selected'))::int as done, count(*)::int as total
+    from shots s join episodes e on e.id = s.episode_id
+    where e.channel_id = ${channelId} and s.status <> 'rejected'
+    group by s.episode_id`);
+  for (const row of r.rows as { episode_id: string; done: number; total: number }[]) out.set(row.episode_id, { done: row.done, total: row.total });
   return out;
 }

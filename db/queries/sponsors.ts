@@ -121,11 +121,11 @@ export async function deleteDeliverableRow(tx: Tx, id: string) {
 }
 
 /** Episodes (of these) that have a deal or use a tool that was not bought. */
-export async function episodesWithSponsorWork({ episodeIds }: { episodeIds: string[] }) {
-  if (!episodeIds.length) return [];
+/** Episodes of a channel with a live deal or a gifted, loaned or paid tool in their plan. */
+export async function episodesWithSponsorWork({ channelId }: { channelId: string }) {
   const r = await db().execute(sql`
-    select distinct e.id from episodes e
-    where e.id in (${sql.join(episodeIds.map((i) => sql`${i}::uuid`), sql`, `)})
+    select e.id from episodes e
+    where e.channel_id = ${channelId}
       and (exists (select 1 from deal_episodes de join deals d on d.id = de.deal_id where de.episode_id = e.id and d.archived_at is null)
         or exists (select 1 from build_steps s join step_tools st on st.step_id = s.id join tools t on t.id = st.tool_id where s.episode_id = e.id and t.acquisition <> 'bought'))`);
   return (r.rows as { id: string }[]).map((x) => x.id);

@@ -78,6 +78,7 @@ export const episodeListQuerySchema = z
     archived: z.enum(["true", "false"]).optional(),
   })
   .strict();
+export type EpisodeListQuery = z.infer<typeof episodeListQuerySchema>;
 
 export const episodeSchema = z
   .object({

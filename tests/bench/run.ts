@@ -58,7 +58,7 @@ console.log(JSON.stringify({ bench: "retime 2,000 segments with timecodes", ours
 const withChapters = (segs: TimingSegment[], measures: Pick<TextMeasures, "of">) => {
   const t = timeScript(segs, rate, { wpm: 150, measures });
   const ch = buildChapters(segs.flatMap((s, i) => (i % 200 === 0 ? [{ segmentId: s.id, title: `Part ${i}`, startFrame: t.segments[i]!.start }] : [])), t.totalFrames, rate);
-  sink += t.totalFrames + ch.length;
+  sink += t.totalFrames + ch.chapters.length;
 };
 const fullRetime = best(() => withChapters(segments, { of: measureText }), 5);
 const memo = new TextMeasures();

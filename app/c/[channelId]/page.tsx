@@ -1,9 +1,8 @@
 import { pageAccess } from "@/lib/server/access/page-access";
-import { listEpisodesByChannel } from "@/db/queries/episodes";
-import { toEpisodeDto } from "@/lib/server/views/episode";
+import type { ComponentProps } from "react";
 import { Board } from "@/components/board/board";
 import { isStage } from "@/lib/stages";
-import { boardFigures } from "@/lib/server/views/board-figures";
+import { boardJson } from "@/lib/server/views/board";
 
 export const metadata = { title: "Episodes" };
 
@@ -11,7 +10,7 @@ export default async function BoardPage({ params, searchParams }: { params: Prom
   const { channelId } = await params;
   const { stage } = await searchParams;
   const access = await pageAccess(channelId, "channel.read", `/c/${channelId}`);
-  const rows = await listEpisodesByChannel({ channelId: access.channelId });
-  const figures = await boardFigures(rows);
-  return <Board channelId={access.channelId} roles={access.roles} initialStage={isStage(stage) ? stage : "all"} initial={rows.map((e) => ({ ...toEpisodeDto(e), ...figures.get(e.id) }))} />;
+  // The same cached cards as GET /api/channels/{id}/episodes.
+  const { episodes } = JSON.parse(await boardJson(access.channelId, {})) as { episodes: ComponentProps<typeof Board>["initial"] };
+  return <Board channelId={access.channelId} roles={access.roles} initialStage={isStage(stage) ? stage : "all"} initial={episodes} />;
 }

@@ -119,3 +119,8 @@ export function sessionUser(req: Request): Promise<SessionUser> {
 export function json(data: unknown, status = 200): Response {
   return Response.json(data, { status });
 }
+
+/** A response of JSON already serialized (a cached view), with any headers it needs. */
+export function jsonText(body: string | null, status = 200, headers: Record<string, string> = {}): Response {
+  return new Response(body, { status, headers: { "content-type": "application/json", ...headers } });
+}

@@ -6,10 +6,13 @@ import { toSegmentDto } from "@/lib/server/views/script";
 import { listStepTitlesByEpisode } from "@/db/queries/build";
 import { scriptViewFor } from "@/lib/server/views/script";
 import { AppError } from "@/lib/server/http/errors";
+import { episodeViewResponse } from "@/lib/server/infra/view-cache";
+import { getEpisodeById } from "@/db/queries/episodes";
 
 /** The script: segments with timing at the episode's rate, totals and chapters. */
-export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
-  return json(await scriptViewFor(episode));
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ req, episode }) => {
+  // Built from the episode as read after the revision, never the row loaded before it.
+  return episodeViewResponse(req, "script", episode.id, async () => scriptViewFor((await getEpisodeById({ id: episode.id })) ?? episode));
 });
 
 export const POST = channelRoute({ load: "episode", action: "script.write", body: segmentCreateSchema, what: "segment" }, async ({ episode, user, body }) => {

@@ -5,9 +5,10 @@ import { linksBelong, listShotsByEpisode } from "@/db/queries/shots";
 import { createShots } from "@/lib/server/services/shots";
 import { toShotDto } from "@/lib/server/views/shots";
 import { AppError } from "@/lib/server/http/errors";
+import { episodeViewResponse } from "@/lib/server/infra/view-cache";
 
-export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ episode }) => {
-  return json({ shots: (await listShotsByEpisode({ episodeId: episode.id })).map(toShotDto) });
+export const GET = channelRoute({ load: "episode", action: "channel.read" }, async ({ req, episode }) => {
+  return episodeViewResponse(req, "shots", episode.id, async () => ({ shots: (await listShotsByEpisode({ episodeId: episode.id })).map(toShotDto) }));
 });
 
 export const POST = channelRoute({ load: "episode", action: "shots.edit", body: shotCreateSchema, what: "shot" }, async ({ episode, body }) => {
