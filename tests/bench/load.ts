@@ -5,6 +5,9 @@
  * autocannon; p50 and p99 latency are reported as ratios against a bare route
  * (GET /api/me: session and one row) measured the same way in the same run.
  * Goal: 0 errors, board/script/shot-list p50 within 3x of the bare route.
+ * The routes serve cached bodies checked against revisions; a last line loads
+ * the script while one of its segments is saved every second, so the body is
+ * rebuilt under load.
  */
 import { sql } from "drizzle-orm";
 import autocannon from "autocannon";
@@ -51,6 +54,14 @@ export async function loadBench() {
     line("board of 500 episodes", await run(`/api/channels/${c}/episodes`));
     line("script of 2,000 segments", await run(`/api/episodes/${e}/script`));
     line("shot list of 1,000 shots", await run(`/api/episodes/${e}/shots`));
+    // The same script while a segment is saved every second (as an autosave would), so the cached body is rebuilt each time.
+    let n = 0;
+    const saving = setInterval(() => void db.execute(sql`update script_segments set text = ${`Edited ${++n}: clamp above and below.`}, version = version + 1 where episode_id = ${e} and position = 1000`), 1000);
+    try {
+      line("script of 2,000 segments, one segment saved every second", await run(`/api/episodes/${e}/script`));
+    } finally {
+      clearInterval(saving);
+    }
   } finally {
     await bench.stop();
   }
