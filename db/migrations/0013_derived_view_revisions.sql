@@ -1,3 +1,8 @@
+CREATE TABLE "channel_revs" (
+	"channel_id" uuid PRIMARY KEY NOT NULL,
+	"rev" bigint DEFAULT 1 NOT NULL
+);
+--> statement-breakpoint
 CREATE TABLE "episode_figures" (
 	"episode_id" uuid PRIMARY KEY NOT NULL,
 	"rev" bigint DEFAULT 1 NOT NULL,
@@ -6,15 +11,28 @@ CREATE TABLE "episode_figures" (
 	"open_gaps" integer
 );
 --> statement-breakpoint
-ALTER TABLE "episode_figures" ADD CONSTRAINT "episode_figures_episode_id_episodes_id_fk" FOREIGN KEY ("episode_id") REFERENCES "public"."episodes"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "channel_revs" ADD CONSTRAINT "channel_revs_channel_id_channels_id_fk" FOREIGN KEY ("channel_id") REFERENCES "public"."channels"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "episode_figures" ADD CONSTRAINT "episode_figures_episode_id_episodes_id_fk" FOREIGN KEY ("episode_id") REFERENCES "public"."episodes"("id") ON DELETE cascade ON UPDATE no action;
+--> statement-breakpoint
+-- Raises the board revision of the given channels (a row is made when missing).
+CREATE OR REPLACE FUNCTION board_touch(p_ids uuid[]) RETURNS void LANGUAGE plpgsql AS $$
+BEGIN
+  IF cardinality(p_ids) = 0 THEN RETURN; END IF;
+  INSERT INTO channel_revs (channel_id)
+    SELECT c.id FROM channels c WHERE c.id = ANY(p_ids) ORDER BY c.id
+  ON CONFLICT (channel_id) DO UPDATE SET rev = channel_revs.rev + 1;
+END $$;
+--> statement-breakpoint
 -- Raises the figures revision of the given episodes (a row is made when
--- missing); episodes already gone (a cascading delete) are skipped.
+-- missing) and the board revision of their channels; episodes already gone
+-- (a cascading delete) are skipped.
 CREATE OR REPLACE FUNCTION figures_touch(p_ids uuid[]) RETURNS void LANGUAGE plpgsql AS $$
 BEGIN
   IF cardinality(p_ids) = 0 THEN RETURN; END IF;
   INSERT INTO episode_figures (episode_id)
     SELECT e.id FROM episodes e WHERE e.id = ANY(p_ids) ORDER BY e.id
   ON CONFLICT (episode_id) DO UPDATE SET rev = episode_figures.rev + 1;
+  PERFORM board_touch(ARRAY(SELECT DISTINCT e.channel_id FROM episodes e WHERE e.id = ANY(p_ids)));
 END $$;
 --> statement-breakpoint
 CREATE OR REPLACE FUNCTION figures_from_episode_rows() RETURNS trigger LANGUAGE plpgsql AS $$
@@ -63,3 +81,19 @@ BEGIN
   CREATE TRIGGER users_figures_update AFTER UPDATE ON users REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_users();
   CREATE TRIGGER channels_figures_update AFTER UPDATE ON channels REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_channels();
 END $$;
+--> statement-breakpoint
+CREATE OR REPLACE FUNCTION board_from_episodes() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  IF TG_OP = 'DELETE' THEN
+    PERFORM board_touch(ARRAY(SELECT DISTINCT channel_id FROM old_rows));
+  ELSE
+    PERFORM board_touch(ARRAY(SELECT DISTINCT channel_id FROM new_rows));
+  END IF;
+  RETURN NULL;
+END $$;
+--> statement-breakpoint
+CREATE TRIGGER episodes_board_insert AFTER INSERT ON episodes REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION board_from_episodes();
+--> statement-breakpoint
+CREATE TRIGGER episodes_board_update AFTER UPDATE ON episodes REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION board_from_episodes();
+--> statement-breakpoint
+CREATE TRIGGER episodes_board_delete AFTER DELETE ON episodes REFERENCING OLD TABLE AS old_rows FOR EACH STATEMENT EXECUTE FUNCTION board_from_episodes();
