@@ -825,13 +825,15 @@ export type PublishPackage = typeof publishPackages.$inferSelect;
 export type ShootLogNote = typeof shootLogNotes.$inferSelect;
 
 /**
- * Each episode's board figures (script runtime, open gaps), kept until what
- * they were computed from changes. Triggers raise `rev` whenever a segment,
- * coverage range, gap or shot of the episode, its rate, target or presenter,
- * the presenter's reading rate or the channel's gap thresholds change; the
- * stored figures count only while `computed_rev` equals `rev`. The script and
- * shot-list responses are cached under the same `rev`. A cache: dropping
- * every row changes nothing but the time of the next read.
+ * Each episode's revision of what is derived from it, and its board figures
+ * (script runtime, open gaps). Triggers make the row with the episode and
+ * raise `rev` in the same transaction as any change to the episode's row,
+ * segments, coverage ranges, gaps or shots, the presenter's reading rate or
+ * the channel's gap thresholds. The stored figures count only while
+ * `computed_rev` equals `rev`; the script and shot-list responses are cached
+ * under `rev`, the board under the channel's list of (episode, rev). Revisions
+ * only ever grow: never delete a row by hand (set `computed_rev` to null to
+ * have figures computed again).
  */
 export const episodeFigures = pgTable("episode_figures", {
   episodeId: uuid("episode_id")
@@ -843,15 +845,3 @@ export const episodeFigures = pgTable("episode_figures", {
   openGaps: integer("open_gaps"),
 });
 export type EpisodeFigures = typeof episodeFigures.$inferSelect;
-
-/**
- * Each channel's revision of its board, raised by triggers whenever an
- * episode of the channel is added, changed or removed, or its figures'
- * inputs change (see episode_figures). The board response is cached under it.
- */
-export const channelRevs = pgTable("channel_revs", {
-  channelId: uuid("channel_id")
-    .primaryKey()
-    .references(() => channels.id, { onDelete: "cascade" }),
-  rev: bigint("rev", { mode: "number" }).notNull().default(1),
-});

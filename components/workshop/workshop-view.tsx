@@ -67,15 +67,30 @@ export function WorkshopView(p: Props) {
   }, [write, refreshQueue, qc, p.episodeId]);
 
   useEffect(() => {
+    // The browser's flag can say online where the server cannot be reached (a workshop
+    // network without a way out, a page opened from the worker's copy): ask the server too.
+    const reach = async () => {
+      if (!navigator.onLine) return setOnline(false);
+      try {
+        await fetchJson("/api/health");
+        setOnline(true);
+      } catch (e) {
+        setOnline(!(e instanceof ApiError && e.status === 0));
+      }
+    };
     const update = () => {
       setOnline(navigator.onLine);
+      void reach();
       if (navigator.onLine) void sendAll();
     };
     update();
     window.addEventListener("online", update);
     window.addEventListener("offline", update);
     // A send that failed without the browser noticing it was offline is tried again.
-    const retry = setInterval(() => void sendAll(), 15_000);
+    const retry = setInterval(() => {
+      void reach();
+      void sendAll();
+    }, 15_000);
     return () => {
       window.removeEventListener("online", update);
       window.removeEventListener("offline", update);

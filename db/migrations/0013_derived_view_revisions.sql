@@ -1,8 +1,3 @@
-CREATE TABLE "channel_revs" (
-	"channel_id" uuid PRIMARY KEY NOT NULL,
-	"rev" bigint DEFAULT 1 NOT NULL
-);
---> statement-breakpoint
 CREATE TABLE "episode_figures" (
 	"episode_id" uuid PRIMARY KEY NOT NULL,
 	"rev" bigint DEFAULT 1 NOT NULL,
@@ -11,28 +6,20 @@ CREATE TABLE "episode_figures" (
 	"open_gaps" integer
 );
 --> statement-breakpoint
-ALTER TABLE "channel_revs" ADD CONSTRAINT "channel_revs_channel_id_channels_id_fk" FOREIGN KEY ("channel_id") REFERENCES "public"."channels"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "episode_figures" ADD CONSTRAINT "episode_figures_episode_id_episodes_id_fk" FOREIGN KEY ("episode_id") REFERENCES "public"."episodes"("id") ON DELETE cascade ON UPDATE no action;
+ALTER TABLE "episode_figures" ADD CONSTRAINT "episode_figures_episode_id_episodes_id_fk" FOREIGN KEY ("episode_id") REFERENCES "public"."episodes"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+-- Every episode has its row from the start, so the channel's list of
+-- (episode, rev) changes with every episode added, changed or removed.
+INSERT INTO "episode_figures" ("episode_id") SELECT "id" FROM "episodes" ON CONFLICT DO NOTHING;
 --> statement-breakpoint
--- Raises the board revision of the given channels (a row is made when missing).
-CREATE OR REPLACE FUNCTION board_touch(p_ids uuid[]) RETURNS void LANGUAGE plpgsql AS $$
-BEGIN
-  IF cardinality(p_ids) = 0 THEN RETURN; END IF;
-  INSERT INTO channel_revs (channel_id)
-    SELECT c.id FROM channels c WHERE c.id = ANY(p_ids) ORDER BY c.id
-  ON CONFLICT (channel_id) DO UPDATE SET rev = channel_revs.rev + 1;
-END $$;
---> statement-breakpoint
--- Raises the figures revision of the given episodes (a row is made when
--- missing) and the board revision of their channels; episodes already gone
--- (a cascading delete) are skipped.
+-- Raises the revision of the given episodes (a row is made when missing);
+-- episodes already gone (a cascading delete) are skipped. Rows are locked in
+-- id order.
 CREATE OR REPLACE FUNCTION figures_touch(p_ids uuid[]) RETURNS void LANGUAGE plpgsql AS $$
 BEGIN
   IF cardinality(p_ids) = 0 THEN RETURN; END IF;
   INSERT INTO episode_figures (episode_id)
     SELECT e.id FROM episodes e WHERE e.id = ANY(p_ids) ORDER BY e.id
   ON CONFLICT (episode_id) DO UPDATE SET rev = episode_figures.rev + 1;
-  PERFORM board_touch(ARRAY(SELECT DISTINCT e.channel_id FROM episodes e WHERE e.id = ANY(p_ids)));
 END $$;
 --> statement-breakpoint
 CREATE OR REPLACE FUNCTION figures_from_episode_rows() RETURNS trigger LANGUAGE plpgsql AS $$
@@ -47,9 +34,7 @@ END $$;
 --> statement-breakpoint
 CREATE OR REPLACE FUNCTION figures_from_episodes() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
-  PERFORM figures_touch(ARRAY(
-    SELECT n.id FROM new_rows n JOIN old_rows o ON o.id = n.id
-    WHERE (n.frame_rate, n.drop_frame, n.target_runtime_seconds, n.presenter_id) IS DISTINCT FROM (o.frame_rate, o.drop_frame, o.target_runtime_seconds, o.presenter_id)));
+  PERFORM figures_touch(ARRAY(SELECT id FROM new_rows));
   RETURN NULL;
 END $$;
 --> statement-breakpoint
@@ -77,23 +62,9 @@ BEGIN
     EXECUTE format('CREATE TRIGGER %I AFTER UPDATE ON %I REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_episode_rows()', t || '_figures_update', t);
     EXECUTE format('CREATE TRIGGER %I AFTER DELETE ON %I REFERENCING OLD TABLE AS old_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_episode_rows()', t || '_figures_delete', t);
   END LOOP;
-  CREATE TRIGGER episodes_figures_update AFTER UPDATE ON episodes REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_episodes();
+  -- An episode's own row: any change, a board move or a new title included (its card shows them).
+  CREATE TRIGGER episodes_figures_insert AFTER INSERT ON episodes REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_episodes();
+  CREATE TRIGGER episodes_figures_update AFTER UPDATE ON episodes REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_episodes();
   CREATE TRIGGER users_figures_update AFTER UPDATE ON users REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_users();
   CREATE TRIGGER channels_figures_update AFTER UPDATE ON channels REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION figures_from_channels();
 END $$;
---> statement-breakpoint
-CREATE OR REPLACE FUNCTION board_from_episodes() RETURNS trigger LANGUAGE plpgsql AS $$
-BEGIN
-  IF TG_OP = 'DELETE' THEN
-    PERFORM board_touch(ARRAY(SELECT DISTINCT channel_id FROM old_rows));
-  ELSE
-    PERFORM board_touch(ARRAY(SELECT DISTINCT channel_id FROM new_rows));
-  END IF;
-  RETURN NULL;
-END $$;
---> statement-breakpoint
-CREATE TRIGGER episodes_board_insert AFTER INSERT ON episodes REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION board_from_episodes();
---> statement-breakpoint
-CREATE TRIGGER episodes_board_update AFTER UPDATE ON episodes REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION board_from_episodes();
---> statement-breakpoint
-CREATE TRIGGER episodes_board_delete AFTER DELETE ON episodes REFERENCING OLD TABLE AS old_rows FOR EACH STATEMENT EXECUTE FUNCTION board_from_episodes();

@@ -46,8 +46,16 @@ export async function getEpisodeRev({ episodeId }: { episodeId: string }): Promi
   return (r.rows[0] as { rev: number } | undefined)?.rev ?? 0;
 }
 
-/** The channel's board revision (0 until its first change is recorded). */
-export async function getChannelRev({ channelId }: { channelId: string }): Promise<number> {
-  const r = await db().execute(sql`select rev::float8 as rev from channel_revs where channel_id = ${channelId}`);
-  return (r.rows[0] as { rev: number } | undefined)?.rev ?? 0;
+/**
+ * The channel's board revision: a digest of every (episode, rev) pair of its
+ * episodes. Revisions only grow and episode ids are never reused, so the
+ * digest changes with every episode added, changed or removed and never
+ * comes back to an earlier value.
+ */
+export async function getChannelRev({ channelId }: { channelId: string }): Promise<string> {
+  const r = await db().execute(sql`
+    select md5(coalesce(string_agg(e.id::text || ':' || coalesce(f.rev, 0), ',' order by e.id), '')) as rev
+    from episodes e left join episode_figures f on f.episode_id = e.id
+    where e.channel_id = ${channelId}`);
+  return (r.rows[0] as { rev: string }).rev;
 }

@@ -57,9 +57,20 @@ test("the workshop view installs: a manifest and a service worker that serves th
   const url = `/c/${channelId}/workshop/${table.id}`;
   await page.goto(url);
   await page.waitForFunction(async () => Boolean((await navigator.serviceWorker.getRegistration())?.active), null, { timeout: 20_000 });
-  // Seen once under the worker's control, the page then opens offline.
+  // Seen once under the worker's control, the page then opens offline: wait until the
+  // worker has stored the page and its scripts (it stores them after answering).
   await page.reload();
   await expect(page.getByTestId("workshop")).toBeVisible();
+  await page.waitForFunction(
+    async (u) => {
+      if (!(await (await caches.open("pages")).match(u))) return false;
+      const scripts = [...document.querySelectorAll<HTMLScriptElement>("script[src]")].map((x) => x.src).filter((x) => x.includes("/_next/static/"));
+      for (const src of scripts) if (!(await caches.match(src, { ignoreSearch: true }))) return false;
+      return true;
+    },
+    url,
+    { timeout: 20_000 },
+  );
   await context.setOffline(true);
   await page.reload();
   await expect(page.getByTestId("workshop")).toBeVisible();

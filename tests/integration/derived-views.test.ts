@@ -135,7 +135,7 @@ describe("stored figures are never older than the data", () => {
     await db().update(scriptSegments).set({ text: words(5) }).where(and(eq(scriptSegments.episodeId, episodeId), eq(scriptSegments.position, 0)));
     await storeEpisodeFigures([{ episodeId, rev: seen.rev, scriptSeconds: 1, openGaps: 99 }]);
     const after = (await listEpisodeFiguresByChannel({ channelId: w.channel.id })).get(episodeId)!;
-    expect(after.rev).toBe(seen.rev + 1);
+    expect(after.rev).toBeGreaterThan(seen.rev);
     expect(after.computedRev).not.toBe(after.rev);
     expect(card((await readAll()).board).openGaps).not.toBe(99);
   });

@@ -34,8 +34,8 @@ function ifNoneMatch(header: string | null, etag: string): boolean {
 
 /**
  * The same for a channel-wide view (the board) under the channel's revision
- * (channel_revs.rev): `build` runs only when the revision moved on, and its
- * result says its own size in characters.
+ * (a digest of its episodes' revisions): `build` runs only when the revision
+ * moved on, and its result says its own size in characters.
  */
 const channelViews = new LRUCache<string, { size: number; value: unknown }>({ maxSize: 64_000_000, sizeCalculation: (v) => Math.max(1, v.size) });
 
