@@ -29,6 +29,8 @@ interface RouteDoc {
   response: z.ZodType;
   status?: number;
   errors: number[];
+  /** Answers with an ETag and takes If-None-Match (304 when the client's copy is current). */
+  conditional?: boolean;
 }
 
 
@@ -73,7 +75,7 @@ export const ROUTES: RouteDoc[] = [
   { method: "post", path: "/api/channels/{channelId}/tools", summary: "Add a tool to the shelf", body: toolCreateSchema, response: z.object({ tool: toolSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
   { method: "patch", path: "/api/tools/{toolId}", summary: "Edit a tool", body: toolUpdateSchema, response: z.object({ tool: toolSchema }), errors: [400, 401, 403, 404, 422] },
   { method: "delete", path: "/api/tools/{toolId}", summary: "Take a tool off the shelf (archive)", response: okSchema, errors: [401, 403, 404, 409] },
-  { method: "get", path: "/api/episodes/{episodeId}/script", summary: "The timed script: segments, timecodes at the episode's rate, totals, chapters", response: scriptSchema, errors: [401, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/script", summary: "The timed script: segments, timecodes at the episode's rate, totals, chapters", response: scriptSchema, errors: [401, 404], conditional: true },
   { method: "post", path: "/api/episodes/{episodeId}/script", summary: "Add a segment (after afterId, or at the end)", body: segmentCreateSchema, response: z.object({ segment: segmentSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
   { method: "put", path: "/api/episodes/{episodeId}/script/order", summary: "Set the order of all segments", body: segmentOrderSchema, response: okSchema, errors: [400, 401, 403, 404, 409] },
   { method: "get", path: "/api/episodes/{episodeId}/script/timing", summary: "Computed timing at a chosen frame rate (query rate, dropFrame)", query: timingQuerySchema, response: z.object({ rate: rateSchema, wordsPerMinute: z.number(), totals: totalsSchema, chapters: chaptersSchema, segments: z.array(segmentTimingSchema.extend({ id: z.string(), kind: z.string(), stepId: z.string().nullable() })) }), errors: [400, 401, 404] },
@@ -87,7 +89,7 @@ export const ROUTES: RouteDoc[] = [
   { method: "get", path: "/api/me", summary: "Me, with my reading rate", response: z.object({ user: z.object({ id: z.string(), email: z.string(), name: z.string(), readingRateWpm: z.number() }) }), errors: [401] },
   { method: "patch", path: "/api/me", summary: "Set my reading rate (100-220 words a minute)", body: readingRateSchema, response: z.object({ user: z.object({ id: z.string(), readingRateWpm: z.number() }) }), errors: [400, 401] },
   { method: "delete", path: "/api/me/sessions", summary: "Sign out everywhere: end every session of my account", response: z.object({ ok: z.boolean() }), errors: [401] },
-  { method: "get", path: "/api/episodes/{episodeId}/shots", summary: "The shot list", response: z.object({ shots: z.array(shotSchema) }), errors: [401, 404] },
+  { method: "get", path: "/api/episodes/{episodeId}/shots", summary: "The shot list", response: z.object({ shots: z.array(shotSchema) }), errors: [401, 404], conditional: true },
   { method: "post", path: "/api/episodes/{episodeId}/shots", summary: "Add a shot (presenter, producer, editor, owner)", body: shotCreateSchema, response: z.object({ shot: shotSchema }), status: 201, errors: [400, 401, 403, 404, 422] },
   { method: "post", path: "/api/episodes/{episodeId}/shots/bulk", summary: "Set one status on many shots (all or none)", body: shotBulkSchema, response: z.object({ updated: z.number() }), errors: [400, 401, 403, 404] },
   { method: "get", path: "/api/episodes/{episodeId}/shots/csv", summary: "Export the shot list as CSV", response: z.string(), errors: [401, 404] },
@@ -191,8 +193,10 @@ export function openApiDocument() {
     const queryParams = r.query
       ? Object.entries(r.query.shape).map(([name, s]) => ({ name, in: "query", required: !(s as z.ZodType).safeParse(undefined).success, schema: schemaOf(s as z.ZodType, "input") }))
       : [];
+    const etag = { ETag: { description: "The revision of this view; send it back as If-None-Match", schema: { type: "string" } } };
     const responses: Record<string, unknown> = {
-      [String(r.status ?? 200)]: { description: "OK", content: { "application/json": { schema: schemaOf(r.response, "output") } } },
+      [String(r.status ?? 200)]: { description: "OK", ...(r.conditional ? { headers: etag } : {}), content: { "application/json": { schema: schemaOf(r.response, "output") } } },
+      ...(r.conditional ? { "304": { description: "Not Modified: the copy named by If-None-Match is current", headers: etag } } : {}),
     };
     for (const code of r.errors) {
       responses[String(code)] = { description: STATUS_TEXT[code] ?? "Error", content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } } };
@@ -200,7 +204,7 @@ export function openApiDocument() {
     (paths[r.path] ??= {})[r.method] = {
       summary: r.summary,
       ...(r.auth === false ? { security: [] } : {}),
-      parameters: [...params, ...queryParams],
+      parameters: [...params, ...queryParams, ...(r.conditional ? [{ name: "If-None-Match", in: "header", required: false, schema: { type: "string" } }] : [])],
       ...(r.textBody ? { requestBody: { required: true, content: { [r.textBody]: { schema: { type: "string" } } } } } : {}),
       ...(r.body ? { requestBody: { required: true, content: { "application/json": { schema: schemaOf(r.body, "input") } } } } : {}),
       responses,

@@ -15,6 +15,7 @@ import { db } from "@/db/client";
 import { channels, coverageRanges, episodeFigures, episodes, scriptSegments, shots, users } from "@/db/schema";
 import { listEpisodeFiguresByChannel, storeEpisodeFigures } from "@/db/queries/figures";
 import { clearViewCache } from "@/lib/server/infra/view-cache";
+import { openApiDocument } from "@/lib/openapi";
 import { call, makeEpisode, makeWorld } from "../support/fixtures";
 
 type World = Awaited<ReturnType<typeof makeWorld>>;
@@ -161,5 +162,8 @@ describe("conditional requests", () => {
       expect(changed.status).toBe(200);
       expect(changed.headers.get("etag")).not.toBe(etag);
     }
+    // The API document says so.
+    const doc = openApiDocument() as unknown as { paths: Record<string, { get: { responses: Record<string, unknown> } }> };
+    for (const p of ["/api/episodes/{episodeId}/script", "/api/episodes/{episodeId}/shots"]) expect(doc.paths[p]!.get.responses["304"]).toBeDefined();
   });
 });
