@@ -88,7 +88,11 @@ async function computeFigures(loaded: Episode[], stored: Map<string, StoredFigur
   const wpm = await listReadingRatesByUserIds({ ids: [...new Set(episodes.flatMap((e) => (e.presenterId ? [e.presenterId] : [])))] });
   const byEpisode = <T extends { episodeId: string }>(rows: T[]) => {
     const m = new Map<string, T[]>();
-    for (const r of rows) m.set(r.episodeId, [...(m.get(r.episodeId) ?? []), r]);
+    for (const r of rows) {
+      const list = m.get(r.episodeId);
+      if (list) list.push(r);
+      else m.set(r.episodeId, [r]);
+    }
     return m;
   };
   const [segs, rangesOf, gapsOf] = [byEpisode(segments), byEpisode(ranges), byEpisode(gaps)];
