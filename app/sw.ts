@@ -18,7 +18,9 @@ const serwist = new Serwist({
   precacheEntries: self.__SW_MANIFEST,
   skipWaiting: true,
   clientsClaim: true,
-  navigationPreload: true,
+  // No navigation preload: with it, a navigation without a signal could fail on the
+  // preload's network error in Chromium before the kept copy of the page was used.
+  navigationPreload: false,
   // The API is never cached here (the live stream never ends, and notes have their own queue);
   // pages are fresh when there is a signal and as last seen when there is none.
   runtimeCaching: [
