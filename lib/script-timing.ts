@@ -81,13 +81,11 @@ export function measureText(text: string): TextMeasure {
  */
 export class TextMeasures {
   private cache = new LRUCache<string, TextMeasure>({ maxSize: 8_000_000, sizeCalculation: (_v, k) => Math.max(1, k.length) });
+  constructor(private readonly measure: (text: string) => TextMeasure = measureText) {}
   of(text: string): TextMeasure {
     let m = this.cache.get(text);
-    if (!m) this.cache.set(text, (m = measureText(text)));
+    if (!m) this.cache.set(text, (m = this.measure(text)));
     return m;
-  }
-  has(text: string): boolean {
-    return this.cache.has(text);
   }
 }
 

@@ -40,7 +40,7 @@ export async function storeEpisodeFigures(rows: { episodeId: string; rev: number
       where episode_figures.rev = excluded.computed_rev`);
 }
 
-/** The episode's revision of derived views (0 until its first change is recorded). */
+/** The episode's revision of derived views (0 should its row be missing). */
 export async function getEpisodeRev({ episodeId }: { episodeId: string }): Promise<number> {
   const r = await db().execute(sql`select rev::float8 as rev from episode_figures where episode_id = ${episodeId}`);
   return (r.rows[0] as { rev: number } | undefined)?.rev ?? 0;

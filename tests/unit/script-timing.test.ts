@@ -171,8 +171,7 @@ describe("retiming with remembered text measures", () => {
 
   it("measures only the text that changed", () => {
     const measured: string[] = [];
-    const memo = new TextMeasures();
-    const counting = { of: (t: string) => (memo.has(t) || measured.push(t), memo.of(t)) };
+    const counting = new TextMeasures((t) => (measured.push(t), measureText(t)));
     const segs: TimingSegment[] = Array.from({ length: 50 }, (_, i) => ({ id: String(i), kind: "voice_over", text: `step ${i} glue and clamp` }));
     timeScript(segs, r25, { measures: counting });
     expect(measured).toHaveLength(50);

@@ -17,7 +17,7 @@ export async function boardJson(channelId: string, query: EpisodeListQuery): Pro
     const rows = await listEpisodesByChannel({ channelId, stage: query.stage, month: query.month, archived: query.archived === "true" });
     const figures = await progressFigures(rows);
     const value = rows.map((e) => ({ episode: e, json: JSON.stringify({ ...toEpisodeDto(e), ...figures.get(e.id) }) }));
-    return { size: value.reduce((n, c) => n + 2 * c.json.length, 0), value };
+    return { bytes: value.reduce((n, c) => n + 2 * c.json.length, 0), value };
   });
   const states = await sponsorStates(cards.map((c) => c.episode));
   const parts = cards.map((c) => {
